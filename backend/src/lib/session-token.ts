@@ -1,0 +1,58 @@
+import { randomBytes } from 'node:crypto';
+
+import jwt from 'jsonwebtoken';
+
+/** RFC 8725: pin the algorithm, check issuer, audience and expiry on every verification. */
+const ALGORITHM = 'HS256' as const;
+const ISSUER = 'tracewright';
+const SESSION_AUDIENCE = 'tracewright-session';
+const DEVICE_AUDIENCE = 'tracewright-device';
+
+export interface SessionClaims {
+  sub: string;
+  tv: number;
+  csrf: string;
+}
+
+export const newCsrfToken = () => randomBytes(24).toString('base64url');
+
+export function signSession(secret: string, claims: SessionClaims, hours: number): string {
+  return jwt.sign({ tv: claims.tv, csrf: claims.csrf }, secret, {
+    algorithm: ALGORITHM,
+    issuer: ISSUER,
+    audience: SESSION_AUDIENCE,
+    subject: claims.sub,
+    expiresIn: Math.round(hours * 3600),
+  });
+}
+
+export function verifySession(secret: string, token: string): SessionClaims | null {
+  try {
+    const payload = jwt.verify(token, secret, { algorithms: [ALGORITHM], issuer: ISSUER, audience: SESSION_AUDIENCE });
+    if (typeof payload === 'string' || typeof payload.sub !== 'string') return null;
+    if (typeof payload.tv !== 'number' || typeof payload.csrf !== 'string') return null;
+    return { sub: payload.sub, tv: payload.tv, csrf: payload.csrf };
+  } catch {
+    return null;
+  }
+}
+
+/** A trusted-device mark: set at a password sign-in, it lets the tablet offer PIN switching. */
+export function signDevice(secret: string, days = 180): string {
+  return jwt.sign({ did: randomBytes(12).toString('base64url') }, secret, {
+    algorithm: ALGORITHM,
+    issuer: ISSUER,
+    audience: DEVICE_AUDIENCE,
+    expiresIn: days * 86_400,
+  });
+}
+
+export function verifyDevice(secret: string, token: string | undefined): boolean {
+  if (!token) return false;
+  try {
+    jwt.verify(token, secret, { algorithms: [ALGORITHM], issuer: ISSUER, audience: DEVICE_AUDIENCE });
+    return true;
+  } catch {
+    return false;
+  }
+}

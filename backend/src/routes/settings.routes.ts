@@ -1,0 +1,17 @@
+import { LabSettingsSchema } from '@tracewright/shared';
+
+import type { AppContext } from '../app-context';
+import { currentUser } from '../middleware/authenticate';
+import { getLabSettings, updateLabSettings } from '../services/settings.service';
+import { route, type RouteSpec } from './route-table';
+
+export function settingsRoutes(ctx: AppContext): RouteSpec[] {
+  return [
+    route('get', '/api/settings', 'signed-in', async (_req, res) => {
+      res.json(await getLabSettings());
+    }),
+    route('put', '/api/settings', ['admin'], async (req, res) => {
+      res.json(await updateLabSettings(ctx, currentUser(req).id, LabSettingsSchema.parse(req.body)));
+    }),
+  ];
+}

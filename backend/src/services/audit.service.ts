@@ -1,0 +1,80 @@
+import type { Transaction } from 'sequelize';
+import { Op, type WhereOptions } from 'sequelize';
+
+import type { AuditEvent, AuditQuery } from '@tracewright/shared';
+
+import type { AppContext } from '../app-context';
+import { AuditEventModel } from '../models/audit-event.model';
+import { UserModel } from '../models/user.model';
+
+export interface AuditEntry {
+  actorId: number | null;
+  action: string;
+  entityType: string;
+  entityId?: string | number | null;
+  before?: unknown;
+  after?: unknown;
+  reason?: string | null;
+  ip?: string | null;
+}
+
+/** Writes one audit row; pass the transaction of the change so both land or neither does. */
+export async function recordAudit(ctx: Pick<AppContext, 'clock'>, entry: AuditEntry, transaction?: Transaction) {
+  await AuditEventModel.create(
+    {
+      at: ctx.clock.now(),
+      actorId: entry.actorId,
+      action: entry.action,
+      entityType: entry.entityType,
+      entityId: entry.entityId === undefined || entry.entityId === null ? null : String(entry.entityId),
+      beforeJson: entry.before ?? null,
+      afterJson: entry.after ?? null,
+      reason: entry.reason ?? null,
+      ip: entry.ip ?? null,
+    },
+    { transaction },
+  );
+}
+
+export async function listAuditEvents(query: AuditQuery): Promise<{ events: AuditEvent[]; total: number }> {
+  const where: WhereOptions = {};
+  if (query.entityType) Object.assign(where, { entityType: query.entityType });
+  if (query.entityId) Object.assign(where, { entityId: query.entityId });
+  if (query.actorId) Object.assign(where, { actorId: query.actorId });
+  if (query.action) Object.assign(where, { action: { [Op.like]: `${query.action.replace(/[%_\\]/g, '\\$&')}%` } });
+  const { rows, count } = await AuditEventModel.findAndCountAll({
+    where,
+    order: [['id', 'DESC']],
+    limit: query.pageSize,
+    offset: (query.page - 1) * query.pageSize,
+    include: [{ model: UserModel, as: 'actor', attributes: ['name'] }],
+  });
+  return {
+    total: count,
+    events: rows.map((row) => {
+      const actor = (row as unknown as { actor?: UserModel | null }).actor;
+      return {
+        id: Number(row.id),
+        at: row.at.toISOString(),
+        actorId: row.actorId,
+        actorName: actor?.name ?? null,
+        action: row.action,
+        entityType: row.entityType,
+        entityId: row.entityId,
+        before: parseJson(row.beforeJson),
+        after: parseJson(row.afterJson),
+        reason: row.reason,
+      };
+    }),
+  };
+}
+
+/** MariaDB stores JSON as LONGTEXT, so the connector may hand back a string. */
+function parseJson(value: unknown): unknown {
+  if (typeof value !== 'string') return value ?? null;
+  try {
+    return JSON.parse(value);
+  } catch {
+    return value;
+  }
+}

@@ -1,0 +1,60 @@
+import { execFileSync } from 'node:child_process';
+import { randomBytes } from 'node:crypto';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+
+import { S3Client, GetObjectCommand } from '@aws-sdk/client-s3';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+
+import { backupTo, restoreFrom } from '../../scripts/lib/backup';
+import { loadEnv } from '../src/config/env';
+import { startS3Fake, type S3Fake } from '../src/dev/s3-fake';
+import { createFileStorage } from '../src/services/file-storage.service';
+import { createUser } from './fixtures';
+import { createTestContext, type TestContext } from './test-context';
+
+let t: TestContext;
+let s3: S3Fake;
+let s3Dir: string;
+let folder: string;
+beforeAll(async () => {
+  t = await createTestContext();
+  s3Dir = mkdtempSync(join(tmpdir(), 'tw-s3-'));
+  folder = mkdtempSync(join(tmpdir(), 'tw-backup-'));
+  s3 = await startS3Fake({ directory: s3Dir });
+});
+afterAll(async () => {
+  await t.close();
+  await s3.close();
+  rmSync(s3Dir, { recursive: true, force: true });
+  rmSync(folder, { recursive: true, force: true });
+});
+
+describe('backup and restore', () => {
+  it('when a backup is restored into an empty database and bucket, then the rows, the audit trigger and the file bytes come back', async () => {
+    const { DB_SOCKET, DB_NAME } = inject('dbEnv');
+    const user = await createUser('engineer', { name: 'Backup Person' });
+    const storage = createFileStorage(loadEnv({ DB_PASSWORD: 'x', JWT_SECRET: 'x'.repeat(32), S3_ENDPOINT: s3.endpoint, S3_BUCKET: 'backup-source' }));
+    await storage.ensureBucket();
+    const bytes = randomBytes(50_000);
+    await storage.put('artwork/trace-layer.png', bytes, 'image/png');
+
+    const manifest = await backupTo(folder, { socket: DB_SOCKET as string, database: DB_NAME as string, s3: { endpoint: s3.endpoint, bucket: 'backup-source' } });
+    expect(manifest.objects).toHaveLength(1);
+
+    const restoredDb = `restore_check_${randomBytes(3).toString('hex')}`;
+    await restoreFrom(folder, { socket: DB_SOCKET as string, database: restoredDb, s3: { endpoint: s3.endpoint, bucket: 'backup-target' } });
+
+    // The app account has no rights on the restored database; read it as the instance's root.
+    const name = execFileSync('mariadb', ['--no-defaults', `--socket=${DB_SOCKET}`, '-uroot', '-N', '-B', '-e', `SELECT name FROM ${restoredDb}.users WHERE id = ${user.id}`], { encoding: 'utf8' }).trim();
+    expect(name).toBe('Backup Person');
+    const triggers = execFileSync('mariadb', ['--no-defaults', `--socket=${DB_SOCKET}`, '-uroot', '-N', '-B', '-e', `SELECT COUNT(*) FROM information_schema.TRIGGERS WHERE TRIGGER_SCHEMA = '${restoredDb}'`], { encoding: 'utf8' }).trim();
+    expect(Number(triggers)).toBe(2);
+
+    const client = new S3Client({ region: 'us-east-1', endpoint: s3.endpoint, forcePathStyle: true, credentials: { accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' } });
+    const back = await client.send(new GetObjectCommand({ Bucket: 'backup-target', Key: 'artwork/trace-layer.png' }));
+    expect(Buffer.from((await back.Body?.transformToByteArray()) ?? []).equals(bytes)).toBe(true);
+    execFileSync('mariadb', ['--no-defaults', `--socket=${DB_SOCKET}`, '-uroot', '-e', `DROP DATABASE ${restoredDb}`]);
+  });
+});

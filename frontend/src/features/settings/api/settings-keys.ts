@@ -1,0 +1,4 @@
+export const settingsKeys = {
+  all: ['settings'] as const,
+  lab: () => [...settingsKeys.all, 'lab'] as const,
+};
