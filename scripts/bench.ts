@@ -7,12 +7,15 @@ import { performance } from 'node:perf_hooks';
 
 import autocannon from 'autocannon';
 
+import { recipeChecks } from '@tracewright/shared';
+
 import { createApp } from '../backend/src/app';
 import { closeAppContext, createAppContext, migrateDatabase } from '../backend/src/bootstrap';
 import { loadEnv } from '../backend/src/config/env';
 import { createLogger } from '../backend/src/lib/logger';
 import { hashSecret } from '../backend/src/lib/secret-hashing';
 import { UserModel } from '../backend/src/models/user.model';
+import { buildFortyStepRecipe } from '../shared/src/rules/recipe/test-fixtures';
 import { startThrowawayDatabase } from './lib/test-database';
 
 interface Figure {
@@ -23,8 +26,20 @@ interface Figure {
   ok: boolean;
 }
 
+/** The builder reruns every process check on each edit: time a full recheck of a 40-step recipe. */
+function measureRecipeRecheck(figures: Figure[]) {
+  const input = buildFortyStepRecipe();
+  for (let i = 0; i < 200; i += 1) recipeChecks(input); // warm-up: let the JIT settle
+  const rounds = 2_000;
+  const started = performance.now();
+  for (let i = 0; i < rounds; i += 1) recipeChecks(input);
+  const perRecheck = (performance.now() - started) / rounds;
+  figures.push({ name: `recipe recheck, ${input.steps.length} steps (mean of ${rounds})`, value: perRecheck, unit: 'ms', target: '≤ 5 ms', ok: perRecheck <= 5 });
+}
+
 async function main() {
   const figures: Figure[] = [];
+  measureRecipeRecheck(figures);
   const db = await startThrowawayDatabase('bench');
   try {
     const env = loadEnv({ ...db.env, JWT_SECRET: 'bench-'.padEnd(48, 'x'), LOG_LEVEL: 'silent', DB_POOL_MAX: '20', SIGN_IN_LIMIT: '100000' });

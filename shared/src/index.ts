@@ -18,3 +18,4 @@ export * from './schemas/material-fit.schema';
 export * from './rules/material-fit';
 export * from './schemas/recipe-step.schema';
 export * from './schemas/recipe.schema';
+export * from './rules/recipe';

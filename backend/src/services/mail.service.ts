@@ -1,6 +1,7 @@
 import nodemailer from 'nodemailer';
 
 import type { Env } from '../config/env';
+import { AppError } from '../errors/app-error';
 
 export interface OutgoingMail {
   to: string | string[];
@@ -22,10 +23,23 @@ export function createMailer(env: Env): Mailer {
     // The fake speaks plain SMTP on loopback; a real server negotiates TLS as usual.
     ignoreTLS: env.MAIL_CAPTURE_DIR !== undefined,
     auth: env.SMTP_USER ? { user: env.SMTP_USER, pass: env.SMTP_PASSWORD ?? '' } : undefined,
+    // A request waiting on mail must not hang for minutes when the mail server is away.
+    connectionTimeout: 10_000,
+    greetingTimeout: 10_000,
+    socketTimeout: 20_000,
   });
   return {
     async send(mail) {
-      await transport.sendMail({ from: env.MAIL_FROM, to: mail.to, subject: mail.subject, text: mail.text });
+      try {
+        await transport.sendMail({ from: env.MAIL_FROM, to: mail.to, subject: mail.subject, text: mail.text });
+      } catch {
+        // Mail goes out after the change is committed, so the change itself is safe: say so.
+        throw new AppError(
+          503,
+          'SERVICE_UNAVAILABLE',
+          'The change was saved, but the mail server did not accept the message. Try sending it again in a few minutes.',
+        );
+      }
     },
     close: () => transport.close(),
   };

@@ -21,6 +21,7 @@ import { PeoplePage } from '../features/people/routes/people-page';
 import { MyPinPage } from '../features/pin/routes/my-pin-page';
 import { pinSwitchLoader } from '../features/pin/routes/pin-switch-loader';
 import { PinSwitchPage } from '../features/pin/routes/pin-switch-page';
+import { recipesRoutes } from '../features/recipes/recipes-routes';
 import { settingsQueryOptions } from '../features/settings/api/get-settings';
 import { settingsLoader } from '../features/settings/routes/settings-loader';
 import { SettingsPage } from '../features/settings/routes/settings-page';
@@ -72,6 +73,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             page({ path: 'settings', loader: guarded(ROUTE_ROLES.settings, settingsLoader(queryClient)), Component: SettingsPage }),
             page({ path: 'dev/mail', loader: guarded(ROUTE_ROLES.devMail, outgoingMailLoader(queryClient)), Component: OutgoingMailPage }),
             page({ path: 'audit', loader: guarded(ROUTE_ROLES.audit, auditLoader(queryClient)), Component: AuditPage }),
+            ...recipesRoutes(queryClient, guarded).map(page),
             ...catalogueRoutes(queryClient, guarded).map(page),
             ...calculatorRoutes(queryClient, guarded).map(page),
             page({ path: '*', Component: NotFoundPage }),

@@ -43,7 +43,7 @@ export function capability(values: readonly number[], limits: SpecLimits): Capab
   if (sigmaWithin === 0 || sigmaOverall === 0) {
     throw new ProcessInputError(
       'values',
-      'values show no variation, so capability indices are undefined.',
+      'The values do not vary, so capability indices are undefined.',
     );
   }
 
@@ -72,11 +72,11 @@ function checkLimits(limits: SpecLimits): SpecLimits {
   if (lsl === undefined && usl === undefined) {
     throw new ProcessInputError(
       'limits',
-      'capability needs at least one specification limit (lsl or usl).',
+      'Capability needs at least one specification limit (lower or upper).',
     );
   }
   if (lsl !== undefined && usl !== undefined && lsl >= usl) {
-    throw new ProcessInputError('usl', `usl must be above lsl; got lsl ${lsl}, usl ${usl}.`);
+    throw new ProcessInputError('usl', `The upper limit must be above the lower limit; got lower ${lsl}, upper ${usl}.`);
   }
   return { lsl, usl };
 }

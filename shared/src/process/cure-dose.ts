@@ -49,7 +49,7 @@ export function cureDoseMinutes(
     if (dt <= 0) {
       throw new ProcessInputError(
         `samples[${i}].minute`,
-        `samples must be in increasing minute order; sample ${i} is not after sample ${i - 1}.`,
+        `Log samples must be in increasing minute order; sample ${i + 1} is not after sample ${i}.`,
       );
     }
     dose += (dt * ((factors[i - 1] as number) + (factors[i] as number))) / 2;

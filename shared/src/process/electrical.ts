@@ -35,7 +35,7 @@ export function traceResistanceOhm(input: {
   if (!Number.isInteger(passes) || passes < 1) {
     throw new ProcessInputError(
       'passes',
-      `passes must be a whole number of 1 or more; got ${passes}.`,
+      `Passes must be a whole number of 1 or more; got ${passes}.`,
     );
   }
   return (rs * squares) / passes;

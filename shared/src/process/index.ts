@@ -16,3 +16,4 @@ export * from './thermal';
 export * from './units';
 export * from './wetting';
 export * from './wetting-margin';
+export { fieldLabel } from './field-labels';

@@ -69,7 +69,7 @@ describe('input guards reject non-physical values', () => {
 
   it('when a negative viscosity is given, then the message says what is wrong and what was received', () => {
     expect(() => requirePositive('viscosityMilliPaS', -1)).toThrow(
-      'viscosityMilliPaS must be above 0; got -1.',
+      'Viscosity (mPa·s) must be above 0; got -1.',
     );
   });
 
@@ -81,7 +81,7 @@ describe('input guards reject non-physical values', () => {
       expect(error).toBeInstanceOf(Error);
       expect(error).toBeInstanceOf(ProcessInputError);
       expect((error as ProcessInputError).message).toBe(
-        'waterAngleDeg must be between 0° and 180°; got 200°.',
+        'Water angle (°) must be between 0° and 180°; got 200°.',
       );
     }
   });

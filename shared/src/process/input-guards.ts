@@ -1,4 +1,5 @@
 import { ZERO_CELSIUS_IN_KELVIN } from './constants';
+import { fieldLabel } from './field-labels';
 import { ProcessInputError } from './process-input-error';
 
 // Shared checks so every function rejects non-physical input with the same wording.
@@ -10,7 +11,7 @@ import { ProcessInputError } from './process-input-error';
 export function requireFinite(field: string, value: number): number {
   // typeof guards callers outside TypeScript (JSON bodies, spreadsheets).
   if (typeof value !== 'number' || !Number.isFinite(value)) {
-    throw new ProcessInputError(field, `${field} must be a finite number; got ${String(value)}.`);
+    throw new ProcessInputError(field, `${fieldLabel(field)} must be a finite number; got ${String(value)}.`);
   }
   return value;
 }
@@ -22,7 +23,7 @@ export function requireFinite(field: string, value: number): number {
 export function requirePositive(field: string, value: number): number {
   requireFinite(field, value);
   if (value <= 0) {
-    throw new ProcessInputError(field, `${field} must be above 0; got ${value}.`);
+    throw new ProcessInputError(field, `${fieldLabel(field)} must be above 0; got ${value}.`);
   }
   return value;
 }
@@ -34,7 +35,7 @@ export function requirePositive(field: string, value: number): number {
 export function requireNonNegative(field: string, value: number): number {
   requireFinite(field, value);
   if (value < 0) {
-    throw new ProcessInputError(field, `${field} must be 0 or more; got ${value}.`);
+    throw new ProcessInputError(field, `${fieldLabel(field)} must be 0 or more; got ${value}.`);
   }
   return value;
 }
@@ -46,7 +47,7 @@ export function requireNonNegative(field: string, value: number): number {
 export function requireInRange(field: string, value: number, min: number, max: number): number {
   requireFinite(field, value);
   if (value < min || value > max) {
-    throw new ProcessInputError(field, `${field} must be between ${min} and ${max}; got ${value}.`);
+    throw new ProcessInputError(field, `${fieldLabel(field)} must be between ${min} and ${max}; got ${value}.`);
   }
   return value;
 }
@@ -61,7 +62,7 @@ export function requireContactAngleDeg(field: string, value: number, open = fals
   const isOutside = open ? value <= 0 || value >= 180 : value < 0 || value > 180;
   if (isOutside) {
     const range = open ? 'strictly between 0° and 180°' : 'between 0° and 180°';
-    throw new ProcessInputError(field, `${field} must be ${range}; got ${value}°.`);
+    throw new ProcessInputError(field, `${fieldLabel(field)} must be ${range}; got ${value}°.`);
   }
   return value;
 }
@@ -75,7 +76,7 @@ export function requireCelsius(field: string, value: number): number {
   if (value <= -ZERO_CELSIUS_IN_KELVIN) {
     throw new ProcessInputError(
       field,
-      `${field} must be above absolute zero (-273.15 °C); got ${value}.`,
+      `${fieldLabel(field)} must be above absolute zero (-273.15 °C); got ${value}.`,
     );
   }
   return value;
@@ -88,7 +89,7 @@ export function requireCelsius(field: string, value: number): number {
 export function requireMinLength<T>(field: string, items: readonly T[], min: number): readonly T[] {
   if (!Array.isArray(items) || items.length < min) {
     const count = Array.isArray(items) ? items.length : 0;
-    throw new ProcessInputError(field, `${field} needs at least ${min} entries; got ${count}.`);
+    throw new ProcessInputError(field, `${fieldLabel(field)} needs at least ${min} entries; got ${count}.`);
   }
   return items;
 }

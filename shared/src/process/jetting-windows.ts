@@ -59,7 +59,7 @@ export function jettingWindow(windowId: JettingWindowId = DEFAULT_JETTING_WINDOW
     const known = Object.keys(JETTING_WINDOWS).join(', ');
     throw new ProcessInputError(
       'window',
-      `window must be one of ${known}; got ${String(windowId)}.`,
+      `The printable window must be one of ${known}; got ${String(windowId)}.`,
     );
   }
   return JETTING_WINDOWS[windowId];

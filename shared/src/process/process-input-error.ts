@@ -3,7 +3,7 @@
  * angle outside 0–180°, an empty series). `field` names the offending input so a form can mark it.
  *
  * @example
- * // new ProcessInputError('viscosityMilliPaS', 'viscosityMilliPaS must be above 0; got -1.')
+ * // new ProcessInputError('viscosityMilliPaS', 'Viscosity (mPa·s) must be above 0; got -1.')
  * // → error.field === 'viscosityMilliPaS'
  */
 export class ProcessInputError extends Error {

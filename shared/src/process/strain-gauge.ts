@@ -1,3 +1,4 @@
+import { fieldLabel } from './field-labels';
 import { requireFinite, requireMinLength, requirePositive } from './input-guards';
 import { ProcessInputError } from './process-input-error';
 
@@ -80,7 +81,7 @@ function requireStrain(field: string, strain: number): number {
   if (strain <= -1) {
     throw new ProcessInputError(
       field,
-      `${field} must be above -1 (a fraction, 0.3 = 30 %); got ${strain}.`,
+      `${fieldLabel(field)} must be above -1 (a fraction, 0.3 = 30 %); got ${strain}.`,
     );
   }
   return strain;
@@ -103,7 +104,7 @@ function fitLine(
   if (sxx === 0) {
     throw new ProcessInputError(
       'points',
-      'points need at least two different strains to fit a slope.',
+      'The points need at least two different strains to fit a slope.',
     );
   }
   const slope = sxy / sxx;

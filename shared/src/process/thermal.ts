@@ -89,7 +89,7 @@ export function activationEnergyFromRateRatioKJPerMol(input: {
   if (t2 <= t1) {
     throw new ProcessInputError(
       'highTempC',
-      `highTempC must be above lowTempC; got ${input.highTempC} ≤ ${input.lowTempC}.`,
+      `The high temperature must be above the low one; got ${input.highTempC} °C ≤ ${input.lowTempC} °C.`,
     );
   }
   const ratio = requirePositive('rateRatio', input.rateRatio);

@@ -95,7 +95,7 @@ describe('inkPrintability', () => {
   it('when a stored printer has a jetting speed of 0, then its row names the problem and the other printers are still judged', () => {
     // A record saved before a rule existed must not hide every other printer's verdict.
     const fit = inkPrintability(GLYCEROL_WATER, [{ ...printer(21), jettingSpeedMetresPerSecond: 0 }, printer(50)]);
-    expect(fit.printers[0]).toMatchObject({ windows: [], problem: expect.stringContaining('dropVelocityMetresPerSecond') });
+    expect(fit.printers[0]).toMatchObject({ windows: [], problem: expect.stringContaining('Drop velocity (m/s)') });
     expect(fit.printers[1]?.problem).toBeNull();
     expect(fit.printers[1]?.windows).toHaveLength(2);
   });
@@ -131,7 +131,7 @@ describe('substrateSurfaceEnergy', () => {
   it.each([
     { name: 'nothing recorded', change: {}, note: /contact angles/ },
     { name: 'parts of 0 mN/m', change: { surfaceEnergyDispersiveMilliNPerM: 0, surfaceEnergyPolarMilliNPerM: 0 }, note: /not physical/ },
-    { name: 'a stored water angle of 200°', change: { waterContactAngleDeg: 200, diiodomethaneContactAngleDeg: 30 }, note: /waterAngleDeg/ },
+    { name: 'a stored water angle of 200°', change: { waterContactAngleDeg: 200, diiodomethaneContactAngleDeg: 30 }, note: /Water angle \(°\)/ },
   ])('when the substrate has $name, then the energy is null with a reason', ({ change, note }) => {
     const result = substrateSurfaceEnergy(surface(change));
     expect(result.energy).toBeNull();
@@ -172,7 +172,7 @@ describe('inkWetting', () => {
   it('when a stored ink has a surface tension of 0, then its row names the problem instead of failing the view', () => {
     const result = inkWetting(liquid('broken ink', null, null, 0), PET_LIKE);
     expect(result).toMatchObject({ margin: null, predictedContactAngleDeg: null });
-    expect(result.reasons[0]).toMatch(/inkSurfaceTensionMilliNPerM/);
+    expect(result.reasons[0]).toMatch(/Ink surface tension \(mN\/m\)/);
   });
 
   it('when the surface energy is unknown, then margin and angle are null with a reason', () => {

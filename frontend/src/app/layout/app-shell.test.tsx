@@ -9,6 +9,8 @@ import { server } from '../../../test/msw-server';
 import { renderApp } from '../../../test/render-app';
 
 const ADMIN_ONLY = ['People', 'Lab settings', 'Outgoing mail'];
+// Pages for everyone signed in grow with the product; these must always be there.
+const FOR_EVERYONE = ['Home', 'My PIN'];
 
 async function navLinkNames() {
   const nav = await screen.findByRole('navigation', { name: 'Main' });
@@ -22,19 +24,20 @@ describe('app shell', () => {
     server.use(...signedInAs('admin'));
     renderApp('/');
 
-    expect(await navLinkNames()).toEqual(['Home', 'Audit log', ...ADMIN_ONLY, 'My PIN']);
+    expect(await navLinkNames()).toEqual(expect.arrayContaining([...FOR_EVERYONE, 'Audit log', ...ADMIN_ONLY]));
   });
 
   it.each([
-    ['quality', ['Home', 'Audit log', 'My PIN']],
-    ['engineer', ['Home', 'My PIN']],
-    ['operator', ['Home', 'My PIN']],
-  ] as [Role, string[]][])('when someone with the %s role is signed in, then no admin link is shown', async (role, expected) => {
+    ['quality', true],
+    ['engineer', false],
+    ['operator', false],
+  ] as [Role, boolean][])('when someone with the %s role is signed in, then no admin link is shown', async (role, seesAudit) => {
     server.use(...signedInAs(role));
     renderApp('/');
 
     const names = await navLinkNames();
-    expect(names).toEqual(expected);
+    expect(names).toEqual(expect.arrayContaining(FOR_EVERYONE));
+    expect(names.includes('Audit log')).toBe(seesAudit);
     for (const adminLink of ADMIN_ONLY) expect(names).not.toContain(adminLink);
   });
 

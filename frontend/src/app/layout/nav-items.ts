@@ -8,6 +8,7 @@ export type NavItem = { to: string; label: string; icon: IconName; roles?: reado
 // No `roles` means everyone who is signed in.
 export const NAV_ITEMS: readonly NavItem[] = [
   { to: '/', label: 'Home', icon: 'home', end: true },
+  { to: '/calculator', label: 'Calculator', icon: 'calculator' },
   { to: '/audit', label: 'Audit log', icon: 'ledger', roles: ROUTE_ROLES.audit },
   { to: '/people', label: 'People', icon: 'people', roles: ROUTE_ROLES.people },
   { to: '/settings', label: 'Lab settings', icon: 'sliders', roles: ROUTE_ROLES.settings },
