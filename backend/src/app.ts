@@ -12,10 +12,13 @@ import { auditRoutes } from './routes/audit.routes';
 import { authRoutes } from './routes/auth.routes';
 import { calibratedEquipmentRoutes } from './routes/calibrated-equipment.routes';
 import { devMailRoutes } from './routes/dev-mail.routes';
+import { fileRoutes } from './routes/files.routes';
 import { healthRoutes } from './routes/health.routes';
 import { inkRoutes } from './routes/inks.routes';
 import { lotRoutes } from './routes/lots.routes';
 import { printerRoutes } from './routes/printers.routes';
+import { recipeVersionRoutes } from './routes/recipe-versions.routes';
+import { recipeRoutes } from './routes/recipes.routes';
 import { mountRoutes } from './routes/route-table';
 import { settingsRoutes } from './routes/settings.routes';
 import { substrateRoutes } from './routes/substrates.routes';
@@ -58,6 +61,9 @@ export function createApp(ctx: AppContext): Express {
     ...lotRoutes(ctx),
     ...printerRoutes(ctx),
     ...calibratedEquipmentRoutes(ctx),
+    ...recipeRoutes(ctx),
+    ...recipeVersionRoutes(ctx),
+    ...fileRoutes(ctx),
     ...devMailRoutes(ctx),
   ]);
 

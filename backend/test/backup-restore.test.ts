@@ -9,6 +9,8 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 
 import { backupTo, restoreFrom } from '../../scripts/lib/backup';
 import { loadEnv } from '../src/config/env';
+import { RecipeVersionModel } from '../src/models/recipe-version.model';
+import { RecipeModel } from '../src/models/recipe.model';
 import { startS3Fake, type S3Fake } from '../src/dev/s3-fake';
 import { createFileStorage } from '../src/services/file-storage.service';
 import { createUser } from './fixtures';
@@ -32,9 +34,11 @@ afterAll(async () => {
 });
 
 describe('backup and restore', () => {
-  it('when a backup is restored into an empty database and bucket, then the rows, the audit trigger and the file bytes come back', async () => {
+  it('when a backup is restored into an empty database and bucket, then the rows, the triggers and the file bytes come back', async () => {
     const { DB_SOCKET, DB_NAME } = inject('dbEnv');
     const user = await createUser('engineer', { name: 'Backup Person' });
+    const recipe = await RecipeModel.create({ code: `BK-${randomBytes(4).toString('hex').toUpperCase()}`, name: 'Backup recipe', product: 'Backup', notes: '', createdBy: user.id });
+    const version = await RecipeVersionModel.create({ recipeId: recipe.id, number: 1, state: 'draft', content: { steps: [] }, contentHash: '0'.repeat(64), authorId: user.id });
     const storage = createFileStorage(loadEnv({ DB_PASSWORD: 'x', JWT_SECRET: 'x'.repeat(32), S3_ENDPOINT: s3.endpoint, S3_BUCKET: 'backup-source' }));
     await storage.ensureBucket();
     const bytes = randomBytes(50_000);
@@ -49,8 +53,19 @@ describe('backup and restore', () => {
     // The app account has no rights on the restored database; read it as the instance's root.
     const name = execFileSync('mariadb', ['--no-defaults', `--socket=${DB_SOCKET}`, '-uroot', '-N', '-B', '-e', `SELECT name FROM ${restoredDb}.users WHERE id = ${user.id}`], { encoding: 'utf8' }).trim();
     expect(name).toBe('Backup Person');
-    const triggers = execFileSync('mariadb', ['--no-defaults', `--socket=${DB_SOCKET}`, '-uroot', '-N', '-B', '-e', `SELECT COUNT(*) FROM information_schema.TRIGGERS WHERE TRIGGER_SCHEMA = '${restoredDb}'`], { encoding: 'utf8' }).trim();
-    expect(Number(triggers)).toBe(2);
+    const triggers = execFileSync('mariadb', ['--no-defaults', `--socket=${DB_SOCKET}`, '-uroot', '-N', '-B', '-e', `SELECT TRIGGER_NAME FROM information_schema.TRIGGERS WHERE TRIGGER_SCHEMA = '${restoredDb}'`], { encoding: 'utf8' }).trim();
+    // Append-only audit and signatures, frozen released recipe versions (migrations 0002, 0006, 0007).
+    expect(triggers.split('\n').sort()).toEqual([
+      'audit_events_no_delete',
+      'audit_events_no_update',
+      'recipe_versions_frozen',
+      'recipe_versions_no_delete',
+      'signatures_no_delete',
+      'signatures_no_update',
+    ]);
+    // Generated columns (the one-open-version keys) must not break the reload of version rows.
+    const openSlot = execFileSync('mariadb', ['--no-defaults', `--socket=${DB_SOCKET}`, '-uroot', '-N', '-B', '-e', `SELECT open_slot FROM ${restoredDb}.recipe_versions WHERE id = ${version.id}`], { encoding: 'utf8' }).trim();
+    expect(Number(openSlot)).toBe(recipe.id);
 
     const client = new S3Client({ region: 'us-east-1', endpoint: s3.endpoint, forcePathStyle: true, credentials: { accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' } });
     const back = await client.send(new GetObjectCommand({ Bucket: 'backup-target', Key: 'artwork/trace-layer.png' }));

@@ -1,14 +1,24 @@
+import { createHash } from 'node:crypto';
+
 import type { Request, RequestHandler } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 
 import type { AppContext } from '../app-context';
+import { SESSION_COOKIE } from './session-cookies';
 
 /**
  * Brute-force brakes for passwords and PINs, keyed by client address and target account.
  * The address is Express's req.ip, which honours X-Forwarded-For only when TRUST_PROXY says so.
  */
-function limiter(windowMs: number, limit: number, message: string, account: (req: Request) => string): RequestHandler {
+function limiter(
+  windowMs: number,
+  limit: number,
+  message: string,
+  account: (req: Request) => string,
+  options: { skipSuccessfulRequests?: boolean } = {},
+): RequestHandler {
   return rateLimit({
+    ...options,
     windowMs,
     limit,
     standardHeaders: 'draft-8',
@@ -44,5 +54,25 @@ export function pinLimiter(ctx: AppContext): RequestHandler {
 export function resetLimiter(ctx: AppContext): RequestHandler {
   return limiter(15 * 60_000, ctx.env.SIGN_IN_LIMIT, 'Too many reset requests. Wait 15 minutes and try again.', (req) =>
     field(req, 'email'),
+  );
+}
+
+/**
+ * Password re-entry for an e-signature, keyed by address, the record being signed and the session
+ * (a hash of its cookie: this runs before authentication), so a stranger's refused requests cannot
+ * lock a reviewer out. Only refusals count, so releasing many versions in a row is never slowed.
+ */
+export function signatureLimiter(ctx: AppContext): RequestHandler {
+  const minutes = ctx.env.SIGN_IN_WINDOW_MINUTES;
+  return limiter(
+    minutes * 60_000,
+    ctx.env.SIGN_IN_LIMIT,
+    `Too many refused signatures on this record. Wait ${Math.ceil(minutes)} minutes and try again.`,
+    (req) => {
+      const session: unknown = req.cookies?.[SESSION_COOKIE];
+      const sessionKey = typeof session === 'string' ? createHash('sha256').update(session).digest('hex').slice(0, 24) : 'none';
+      return `${req.path}|${sessionKey}`;
+    },
+    { skipSuccessfulRequests: true },
   );
 }

@@ -9,6 +9,9 @@ import { MaterialLotModel } from './material-lot.model';
 import { OneTimeTokenModel } from './one-time-token.model';
 import { PrinterChannelModel } from './printer-channel.model';
 import { PrinterModel } from './printer.model';
+import { RecipeVersionModel } from './recipe-version.model';
+import { RecipeModel } from './recipe.model';
+import { SignatureModel } from './signature.model';
 import { StoredFileModel } from './stored-file.model';
 import { SubstrateModel } from './substrate.model';
 import { SurfaceTreaterModel } from './surface-treater.model';
@@ -29,6 +32,9 @@ export function initModels(sequelize: Sequelize): void {
   HeatSourceModel.initModel(sequelize);
   SurfaceTreaterModel.initModel(sequelize);
   InstrumentModel.initModel(sequelize);
+  RecipeModel.initModel(sequelize);
+  RecipeVersionModel.initModel(sequelize);
+  SignatureModel.initModel(sequelize);
 
   OneTimeTokenModel.belongsTo(UserModel, { foreignKey: 'userId', as: 'user' });
   AuditEventModel.belongsTo(UserModel, { foreignKey: 'actorId', as: 'actor', constraints: false });

@@ -5,6 +5,7 @@ import { UserModel } from '../models/user.model';
 import { recordAudit } from '../services/audit.service';
 import { DEMO_PASSWORD, DEMO_PEOPLE, DEMO_SETTINGS } from './demo-people';
 import { seedDemoMaterials } from './seed-demo-materials';
+import { seedDemoRecipes } from './seed-demo-recipes';
 
 /**
  * Seeds the fictional demo lab into an empty database. Runs at every `npm start` and does
@@ -26,6 +27,7 @@ export async function seedDemoLab(ctx: AppContext): Promise<{ seeded: boolean }>
     }
     await LabSettingsModel.upsert({ id: 1, ...DEMO_SETTINGS, updatedAt: ctx.clock.now() }, { transaction });
     await seedDemoMaterials(ctx, transaction);
+    await seedDemoRecipes(ctx, transaction);
   });
   return { seeded: true };
 }

@@ -33,3 +33,62 @@ export function passwordResetMail(args: { to: string; name: string; link: string
     ].join('\n'),
   };
 }
+
+interface VersionMailArgs {
+  recipeCode: string;
+  recipeName: string;
+  versionNumber: number;
+  link: string;
+}
+
+const versionLabel = (a: VersionMailArgs) => `${a.recipeCode} version ${a.versionNumber}`;
+
+export function reviewRequestedMail(args: VersionMailArgs & { to: string[]; submittedBy: string; warnings: number }): OutgoingMail {
+  return {
+    to: args.to,
+    subject: `Review requested: ${versionLabel(args)} (${args.recipeName})`,
+    text: [
+      'Hello,',
+      '',
+      `${args.submittedBy} has sent ${versionLabel(args)} of “${args.recipeName}” to quality for review.`,
+      args.warnings > 0 ? `The process checks show ${args.warnings} warning(s) and nothing blocking; look at them before you release.` : 'The process checks show nothing blocking.',
+      '',
+      'Open it to review, release with your signature, or send it back with a comment:',
+      '',
+      args.link,
+    ].join('\n'),
+  };
+}
+
+export function versionReleasedMail(args: VersionMailArgs & { to: string; name: string; releasedBy: string; retiredNumber: number | null }): OutgoingMail {
+  return {
+    to: args.to,
+    subject: `Released: ${versionLabel(args)}`,
+    text: [
+      `Hello ${args.name},`,
+      '',
+      `${args.releasedBy} has signed and released ${versionLabel(args)} of “${args.recipeName}” (approved for production).`,
+      args.retiredNumber === null ? 'Operators can now run it.' : `Operators now run it; version ${args.retiredNumber} is retired.`,
+      '',
+      args.link,
+    ].join('\n'),
+  };
+}
+
+export function versionSentBackMail(args: VersionMailArgs & { to: string; name: string; sentBackBy: string; comment: string }): OutgoingMail {
+  return {
+    to: args.to,
+    subject: `Sent back: ${versionLabel(args)}`,
+    text: [
+      `Hello ${args.name},`,
+      '',
+      `${args.sentBackBy} has sent ${versionLabel(args)} of “${args.recipeName}” back to draft with this comment:`,
+      '',
+      ...args.comment.split('\n').map((line) => `> ${line}`),
+      '',
+      'Open it to make the changes and submit it again:',
+      '',
+      args.link,
+    ].join('\n'),
+  };
+}
