@@ -1,8 +1,16 @@
+import { readdirSync } from 'node:fs';
+import { join } from 'node:path';
+
 import js from '@eslint/js';
 import checkFile from 'eslint-plugin-check-file';
 import importX from 'eslint-plugin-import-x';
 import reactHooks from 'eslint-plugin-react-hooks';
 import tseslint from 'typescript-eslint';
+
+// Every folder under frontend/src/features is a feature: none may import another.
+const FEATURES = readdirSync(join(import.meta.dirname, 'frontend', 'src', 'features'), { withFileTypes: true })
+  .filter((entry) => entry.isDirectory())
+  .map((entry) => entry.name);
 
 export default tseslint.config(
   {
@@ -58,7 +66,7 @@ export default tseslint.config(
             { target: './frontend/src/lib', from: ['./frontend/src/features', './frontend/src/app'] },
             { target: './frontend/src/components', from: ['./frontend/src/features', './frontend/src/app'] },
             { target: './frontend/src/features', from: './frontend/src/app' },
-            ...['auth', 'pin', 'people', 'settings', 'audit', 'dev-mail', 'home', 'materials', 'equipment', 'calculator', 'recipes', 'runs', 'run-view', 'deviations', 'trends'].map(
+            ...FEATURES.map(
               (feature) => ({
                 target: `./frontend/src/features/${feature}`,
                 from: './frontend/src/features',

@@ -21,12 +21,11 @@ export default defineConfig({
     emptyOutDir: true,
     rolldownOptions: {
       output: {
-        // Libraries change less often than our code; separate chunks stay cached across releases.
+        // The core every page needs changes less often than our code, so it stays cached across
+        // releases. Everything else follows the lazy routes that import it, so the tablet run view
+        // never downloads the builder's drag and drop, the charts or the PDF renderer.
         codeSplitting: {
-          groups: [
-            { name: 'react', test: /node_modules[\\/](react|react-dom|scheduler)[\\/]/ },
-            { name: 'libs', test: /node_modules/ },
-          ],
+          groups: [{ name: 'core', test: /node_modules[\\/](react|react-dom|scheduler|react-router|@tanstack)[\\/]/ }],
         },
       },
     },
@@ -37,5 +36,7 @@ export default defineConfig({
     include: ['src/**/*.test.{ts,tsx}'],
     setupFiles: ['./test/setup.ts'],
     restoreMocks: true,
+    // Whole-page tests (lazy routes, forms, MSW) take seconds on a busy 2-core machine.
+    testTimeout: 20_000,
   },
 });

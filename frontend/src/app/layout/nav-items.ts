@@ -8,6 +8,9 @@ export type NavItem = { to: string; label: string; icon: IconName; roles?: reado
 // No `roles` means everyone who is signed in.
 export const NAV_ITEMS: readonly NavItem[] = [
   { to: '/', label: 'Home', icon: 'home', end: true },
+  { to: '/recipes', label: 'Recipes', icon: 'ledger' },
+  { to: '/materials', label: 'Materials', icon: 'flask' },
+  { to: '/equipment', label: 'Equipment', icon: 'printer' },
   { to: '/calculator', label: 'Calculator', icon: 'calculator' },
   { to: '/audit', label: 'Audit log', icon: 'ledger', roles: ROUTE_ROLES.audit },
   { to: '/people', label: 'People', icon: 'people', roles: ROUTE_ROLES.people },

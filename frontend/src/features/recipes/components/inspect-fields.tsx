@@ -1,0 +1,12 @@
+import { fieldError } from '../utils/step-form-types';
+import type { KindFieldsProps } from './step-fields-context';
+import { TextAreaField } from './text-area-field';
+
+export function InspectFields({ form }: KindFieldsProps) {
+  return (
+    <>
+      <TextAreaField label="What to look at" help="What a good part looks like, and what sends it back." error={fieldError(form, 'params.lookFor')} {...form.register('params.lookFor')} />
+      <TextAreaField label="What to measure" help="Readings themselves go under “Readings” below, with their limits." error={fieldError(form, 'params.measure')} {...form.register('params.measure')} />
+    </>
+  );
+}

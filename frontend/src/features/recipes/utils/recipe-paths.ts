@@ -1,0 +1,1 @@
+export const recipeVersionPath = (recipeId: number, versionId: number) => `/recipes/${recipeId}/versions/${versionId}`;
