@@ -12,6 +12,7 @@ import { auditRoutes } from './routes/audit.routes';
 import { authRoutes } from './routes/auth.routes';
 import { calibratedEquipmentRoutes } from './routes/calibrated-equipment.routes';
 import { devMailRoutes } from './routes/dev-mail.routes';
+import { deviationRoutes } from './routes/deviations.routes';
 import { fileRoutes } from './routes/files.routes';
 import { healthRoutes } from './routes/health.routes';
 import { inkRoutes } from './routes/inks.routes';
@@ -19,9 +20,14 @@ import { lotRoutes } from './routes/lots.routes';
 import { printerRoutes } from './routes/printers.routes';
 import { recipeVersionRoutes } from './routes/recipe-versions.routes';
 import { recipeRoutes } from './routes/recipes.routes';
+import { runRecordRoutes } from './routes/run-records.routes';
+import { runSignOffRoutes } from './routes/run-sign-off.routes';
+import { runStepRoutes } from './routes/run-steps.routes';
 import { mountRoutes } from './routes/route-table';
+import { runRoutes } from './routes/runs.routes';
 import { settingsRoutes } from './routes/settings.routes';
 import { substrateRoutes } from './routes/substrates.routes';
+import { trendRoutes } from './routes/trends.routes';
 import { userRoutes } from './routes/users.routes';
 
 /** Builds the Express app (middleware, routes, error handler) without listening. */
@@ -55,7 +61,7 @@ export function createApp(ctx: AppContext): Express {
     ...authRoutes(ctx),
     ...userRoutes(ctx),
     ...settingsRoutes(ctx),
-    ...auditRoutes(),
+    ...auditRoutes(ctx),
     ...inkRoutes(ctx),
     ...substrateRoutes(ctx),
     ...lotRoutes(ctx),
@@ -63,6 +69,12 @@ export function createApp(ctx: AppContext): Express {
     ...calibratedEquipmentRoutes(ctx),
     ...recipeRoutes(ctx),
     ...recipeVersionRoutes(ctx),
+    ...runRoutes(ctx),
+    ...runStepRoutes(ctx),
+    ...runRecordRoutes(ctx),
+    ...runSignOffRoutes(ctx),
+    ...deviationRoutes(ctx),
+    ...trendRoutes(ctx),
     ...fileRoutes(ctx),
     ...devMailRoutes(ctx),
   ]);

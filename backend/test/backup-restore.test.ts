@@ -54,14 +54,30 @@ describe('backup and restore', () => {
     const name = execFileSync('mariadb', ['--no-defaults', `--socket=${DB_SOCKET}`, '-uroot', '-N', '-B', '-e', `SELECT name FROM ${restoredDb}.users WHERE id = ${user.id}`], { encoding: 'utf8' }).trim();
     expect(name).toBe('Backup Person');
     const triggers = execFileSync('mariadb', ['--no-defaults', `--socket=${DB_SOCKET}`, '-uroot', '-N', '-B', '-e', `SELECT TRIGGER_NAME FROM information_schema.TRIGGERS WHERE TRIGGER_SCHEMA = '${restoredDb}'`], { encoding: 'utf8' }).trim();
-    // Append-only audit and signatures, frozen released recipe versions (migrations 0002, 0006, 0007).
+    // Append-only audit and signatures, frozen released recipe versions, kept readings and
+    // deviations (migrations 0002, 0006, 0007, 0010, 0011), read-only closed deviations, their
+    // history and signed dispositions, run sign-offs and trend notes (0013–0017).
     expect(triggers.split('\n').sort()).toEqual([
       'audit_events_no_delete',
       'audit_events_no_update',
+      'deviation_dispositions_kept',
+      'deviation_dispositions_no_delete',
+      'deviation_events_no_delete',
+      'deviation_events_no_update',
+      'deviations_closed_frozen',
+      'deviations_no_delete',
       'recipe_versions_frozen',
       'recipe_versions_no_delete',
+      'run_readings_kept',
+      'run_readings_no_delete',
+      'run_sign_offs_no_delete',
+      'run_sign_offs_no_update',
       'signatures_no_delete',
       'signatures_no_update',
+      'trend_baselines_no_delete',
+      'trend_baselines_no_update',
+      'trend_point_notes_no_delete',
+      'trend_point_notes_no_update',
     ]);
     // Generated columns (the one-open-version keys) must not break the reload of version rows.
     const openSlot = execFileSync('mariadb', ['--no-defaults', `--socket=${DB_SOCKET}`, '-uroot', '-N', '-B', '-e', `SELECT open_slot FROM ${restoredDb}.recipe_versions WHERE id = ${version.id}`], { encoding: 'utf8' }).trim();

@@ -1,3 +1,4 @@
+/// <reference types="vite-plugin-pwa/client" />
 import './index.css';
 
 import { StrictMode } from 'react';
@@ -21,3 +22,22 @@ createRoot(container).render(
     </AppProvider>
   </StrictMode>,
 );
+
+// The service worker keeps the app and the run a tablet works on available without a network.
+// Production builds only: in development it would cache what is being edited.
+if (import.meta.env.PROD) {
+  void import('virtual:pwa-register').then(({ registerSW }) =>
+    registerSW({
+      immediate: true,
+      // A new version takes over at once, but the page reloads only once it is out of sight, so
+      // nobody loses a half-typed reading or problem report to an update.
+      onNeedReload: () => {
+        const reloadWhenHidden = () => {
+          if (document.visibilityState === 'hidden') window.location.reload();
+        };
+        if (document.visibilityState === 'hidden') window.location.reload();
+        else document.addEventListener('visibilitychange', reloadWhenHidden);
+      },
+    }),
+  );
+}

@@ -25,3 +25,8 @@ export * from './rules/run';
 export * from './schemas/signature.schema';
 export * from './schemas/artwork.schema';
 export * from './schemas/recipe-views.schema';
+export * from './schemas/deviation.schema';
+export * from './schemas/run-writes.schema';
+export * from './rules/quality';
+export * from './schemas/quality-views.schema';
+export * from './schemas/audit-search.schema';

@@ -16,3 +16,9 @@ export const recordAttributes = () => ({
 export const requiredNumber = () => ({ type: DataTypes.DOUBLE, allowNull: false });
 export const optionalNumber = () => ({ type: DataTypes.DOUBLE, allowNull: true });
 export const notes = () => ({ type: DataTypes.TEXT, allowNull: false, defaultValue: '' });
+
+/** The tablet's own clock beside ours, and whether the write was made offline (tablet records). */
+export const deviceColumns = () => ({
+  deviceTime: { type: DataTypes.DATE(3), allowNull: true },
+  madeOffline: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+});

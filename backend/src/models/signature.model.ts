@@ -7,14 +7,14 @@ import {
   type Sequelize,
 } from 'sequelize';
 
-import type { SignatureMeaning } from '@tracewright/shared';
+import type { QualitySignatureMeaning, SignatureMeaning } from '@tracewright/shared';
 
-/** An e-signature row; append-only (triggers of migration 0007). */
+/** An e-signature row; append-only (triggers of migration 0007). Recipe releases and quality's decisions each carry their own meaning. */
 export class SignatureModel extends Model<InferAttributes<SignatureModel>, InferCreationAttributes<SignatureModel>> {
   declare id: CreationOptional<number>;
   declare userId: number;
   declare printedName: string;
-  declare meaning: SignatureMeaning;
+  declare meaning: SignatureMeaning | QualitySignatureMeaning;
   declare signedAt: Date;
   declare entityType: string;
   declare entityId: number;

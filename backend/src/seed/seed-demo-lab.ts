@@ -6,6 +6,7 @@ import { recordAudit } from '../services/audit.service';
 import { DEMO_PASSWORD, DEMO_PEOPLE, DEMO_SETTINGS } from './demo-people';
 import { seedDemoMaterials } from './seed-demo-materials';
 import { seedDemoRecipes } from './seed-demo-recipes';
+import { seedDemoRuns } from './seed-demo-runs';
 
 /**
  * Seeds the fictional demo lab into an empty database. Runs at every `npm start` and does
@@ -28,6 +29,7 @@ export async function seedDemoLab(ctx: AppContext): Promise<{ seeded: boolean }>
     await LabSettingsModel.upsert({ id: 1, ...DEMO_SETTINGS, updatedAt: ctx.clock.now() }, { transaction });
     await seedDemoMaterials(ctx, transaction);
     await seedDemoRecipes(ctx, transaction);
+    await seedDemoRuns(ctx, transaction);
   });
   return { seeded: true };
 }

@@ -1,11 +1,12 @@
 import type { Transaction } from 'sequelize';
-import { Op, type WhereOptions } from 'sequelize';
 
-import type { AuditEvent, AuditQuery } from '@tracewright/shared';
+import type { AuditEvent, AuditSearchQuery } from '@tracewright/shared';
 
 import type { AppContext } from '../app-context';
 import { AuditEventModel } from '../models/audit-event.model';
 import { UserModel } from '../models/user.model';
+import { auditFilter } from './audit-filters';
+import { getLabSettings } from './settings.service';
 
 export interface AuditEntry {
   actorId: number | null;
@@ -36,41 +37,38 @@ export async function recordAudit(ctx: Pick<AppContext, 'clock'>, entry: AuditEn
   );
 }
 
-export async function listAuditEvents(query: AuditQuery): Promise<{ events: AuditEvent[]; total: number }> {
-  const where: WhereOptions = {};
-  if (query.entityType) Object.assign(where, { entityType: query.entityType });
-  if (query.entityId) Object.assign(where, { entityId: query.entityId });
-  if (query.actorId) Object.assign(where, { actorId: query.actorId });
-  if (query.action) Object.assign(where, { action: { [Op.like]: `${query.action.replace(/[%_\\]/g, '\\$&')}%` } });
+/** An audit row as the API shows it, the actor's name resolved. */
+export function toAuditEvent(row: AuditEventModel): AuditEvent {
+  const actor = (row as unknown as { actor?: UserModel | null }).actor;
+  return {
+    id: Number(row.id),
+    at: row.at.toISOString(),
+    actorId: row.actorId,
+    actorName: actor?.name ?? null,
+    action: row.action,
+    entityType: row.entityType,
+    entityId: row.entityId,
+    before: parseJson(row.beforeJson),
+    after: parseJson(row.afterJson),
+    reason: row.reason,
+  };
+}
+
+/** GET /api/audit-events: newest first under the filters (entity, actor, action prefix, lab days, text), a page at a time. */
+export async function listAuditEvents(query: AuditSearchQuery): Promise<{ events: AuditEvent[]; total: number }> {
+  const { timeZone } = await getLabSettings();
   const { rows, count } = await AuditEventModel.findAndCountAll({
-    where,
+    where: auditFilter(query, timeZone),
     order: [['id', 'DESC']],
     limit: query.pageSize,
     offset: (query.page - 1) * query.pageSize,
     include: [{ model: UserModel, as: 'actor', attributes: ['name'] }],
   });
-  return {
-    total: count,
-    events: rows.map((row) => {
-      const actor = (row as unknown as { actor?: UserModel | null }).actor;
-      return {
-        id: Number(row.id),
-        at: row.at.toISOString(),
-        actorId: row.actorId,
-        actorName: actor?.name ?? null,
-        action: row.action,
-        entityType: row.entityType,
-        entityId: row.entityId,
-        before: parseJson(row.beforeJson),
-        after: parseJson(row.afterJson),
-        reason: row.reason,
-      };
-    }),
-  };
+  return { total: count, events: rows.map(toAuditEvent) };
 }
 
 /** MariaDB stores JSON as LONGTEXT, so the connector may hand back a string. */
-function parseJson(value: unknown): unknown {
+export function parseJson(value: unknown): unknown {
   if (typeof value !== 'string') return value ?? null;
   try {
     return JSON.parse(value);

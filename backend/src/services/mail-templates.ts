@@ -92,3 +92,35 @@ export function versionSentBackMail(args: VersionMailArgs & { to: string; name: 
     ].join('\n'),
   };
 }
+
+export function problemReportedMail(args: {
+  to: string[];
+  runCode: string;
+  recipeCode: string;
+  severity: string;
+  title: string;
+  description: string;
+  reportedBy: string;
+  photoCount: number;
+  link: string;
+  deviationLink: string;
+}): OutgoingMail {
+  return {
+    to: args.to,
+    subject: `${args.severity === 'critical' ? 'Critical' : 'Major'} problem reported: run ${args.runCode}`,
+    text: [
+      'Hello,',
+      '',
+      `${args.reportedBy} has reported a ${args.severity} problem on run ${args.runCode}${args.recipeCode ? ` (${args.recipeCode})` : ''}:`,
+      '',
+      args.title,
+      ...args.description.split('\n').map((line) => `> ${line}`),
+      '',
+      args.photoCount > 0 ? `${args.photoCount} photo(s) are attached to the deviation.` : 'No photos were attached.',
+      'It waits in the deviation queue for review. Open the deviation, or the run:',
+      '',
+      args.deviationLink,
+      args.link,
+    ].join('\n'),
+  };
+}

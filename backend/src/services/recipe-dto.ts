@@ -88,11 +88,12 @@ export function versionSummary(row: RecipeVersionModel, people: Map<number, stri
   };
 }
 
+/** A recipe version's signature; release is its only signing, so the meaning is release's. */
 export const toSignatureDto = (row: SignatureModel): Signature => ({
   id: row.id,
   userId: row.userId,
   printedName: row.printedName,
-  meaning: row.meaning,
+  meaning: row.meaning as Signature['meaning'],
   signedAt: row.signedAt.toISOString(),
   entityType: row.entityType,
   entityId: row.entityId,

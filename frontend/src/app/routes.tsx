@@ -21,7 +21,10 @@ import { PeoplePage } from '../features/people/routes/people-page';
 import { MyPinPage } from '../features/pin/routes/my-pin-page';
 import { pinSwitchLoader } from '../features/pin/routes/pin-switch-loader';
 import { PinSwitchPage } from '../features/pin/routes/pin-switch-page';
+import { qualityRoutes } from '../features/quality/quality-routes';
 import { recipesRoutes } from '../features/recipes/recipes-routes';
+import { runViewRoutes } from '../features/run-view/run-view-routes';
+import { runsRoutes } from '../features/runs/runs-routes';
 import { settingsQueryOptions } from '../features/settings/api/get-settings';
 import { settingsLoader } from '../features/settings/routes/settings-loader';
 import { SettingsPage } from '../features/settings/routes/settings-page';
@@ -58,6 +61,8 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             page({ path: 'set-password/:token', loader: setPasswordLoader(queryClient), Component: SetPasswordPage }),
           ],
         }),
+        // The tablet run view has its own full-screen layout; its loader checks the session itself.
+        ...runViewRoutes(queryClient, guarded).map(page),
         page({
           Component: AppShell,
           loader: async ({ request }) => {
@@ -74,6 +79,8 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             page({ path: 'dev/mail', loader: guarded(ROUTE_ROLES.devMail, outgoingMailLoader(queryClient)), Component: OutgoingMailPage }),
             page({ path: 'audit', loader: guarded(ROUTE_ROLES.audit, auditLoader(queryClient)), Component: AuditPage }),
             ...recipesRoutes(queryClient, guarded).map(page),
+            ...runsRoutes(queryClient, guarded).map(page),
+            ...qualityRoutes(queryClient, guarded).map(page),
             ...catalogueRoutes(queryClient, guarded).map(page),
             ...calculatorRoutes(queryClient, guarded).map(page),
             page({ path: '*', Component: NotFoundPage }),

@@ -9,6 +9,9 @@ export type NavItem = { to: string; label: string; icon: IconName; roles?: reado
 export const NAV_ITEMS: readonly NavItem[] = [
   { to: '/', label: 'Home', icon: 'home', end: true },
   { to: '/recipes', label: 'Recipes', icon: 'ledger' },
+  { to: '/runs', label: 'Runs', icon: 'ledger' },
+  { to: '/deviations', label: 'Deviations', icon: 'ledger', roles: ['admin', 'engineer', 'quality'] },
+  { to: '/trends', label: 'Trends', icon: 'ledger', roles: ['admin', 'engineer', 'quality'] },
   { to: '/materials', label: 'Materials', icon: 'flask' },
   { to: '/equipment', label: 'Equipment', icon: 'printer' },
   { to: '/calculator', label: 'Calculator', icon: 'calculator' },

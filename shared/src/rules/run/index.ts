@@ -35,3 +35,4 @@ export type { StepRef } from './text-format';
 export { timerElapsedSeconds, timerOutcome, timerRemainingSeconds, type RunTimer, type TimerOutcome } from './timer-rules';
 export { travellerSteps, type TravellerReading, type TravellerStep } from './traveller';
 export { treatmentWaitExceeded, type StepCompletion, type TreatmentWait } from './treatment-wait';
+export { materialsUsed, type MaterialsUsed } from './materials-used';

@@ -1,0 +1,21 @@
+import type { ComponentProps } from 'react';
+
+import { FieldMessage } from '../../../components/ui/field-message';
+import { fieldClasses } from '../../../components/ui/field-styles';
+import { useFieldIds } from '../../../components/ui/use-field-ids';
+
+type TextAreaFieldProps = ComponentProps<'textarea'> & { label: string; help?: string; error?: string };
+
+/** Label above, the text box, then help and problem under it, like every field here. */
+export function TextAreaField({ label, help, error, id: givenId, className = '', rows = 4, ...rest }: TextAreaFieldProps) {
+  const { id, helpId, errorId, describedBy } = useFieldIds(Boolean(help), Boolean(error), givenId);
+  return (
+    <div className={`flex flex-col gap-1 ${className}`}>
+      <label htmlFor={id} className="font-bold text-graphite-900">
+        {label}
+      </label>
+      <textarea id={id} rows={rows} className={fieldClasses(Boolean(error))} aria-invalid={error ? true : undefined} aria-describedby={describedBy} {...rest} />
+      <FieldMessage id={errorId} helpId={helpId} help={help} error={error} />
+    </div>
+  );
+}

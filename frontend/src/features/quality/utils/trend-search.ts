@@ -1,0 +1,14 @@
+/** The chosen reading spec lives in the address (?recipeId=&specId=), so a trend can be bookmarked. */
+export type TrendChoice = { recipeId: number; specId: string } | null;
+
+export function trendChoiceOf(params: URLSearchParams): TrendChoice {
+  const recipeId = Number(params.get('recipeId'));
+  const specId = params.get('specId')?.trim() ?? '';
+  if (!Number.isInteger(recipeId) || recipeId < 1 || specId === '' || specId.length > 40) return null;
+  return { recipeId, specId };
+}
+
+export function trendSearchFor(choice: TrendChoice): string {
+  if (!choice) return '';
+  return `?${new URLSearchParams({ recipeId: String(choice.recipeId), specId: choice.specId }).toString()}`;
+}

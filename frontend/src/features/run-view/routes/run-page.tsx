@@ -1,0 +1,22 @@
+import { useSyncExternalStore } from 'react';
+import { useParams } from 'react-router';
+
+import { LoadingState } from '../../../components/ui/loading-state';
+import { useSession } from '../../../lib/session';
+import { OutboxContext } from '../hooks/outbox-context';
+import { useBenchOutbox } from '../hooks/use-bench-outbox';
+import { RunScreen } from './run-screen';
+
+/** /run/:runId — the tablet view of a run, full screen, outside the desk shell. */
+export function RunPage() {
+  const runId = Number(useParams().runId);
+  const { user } = useSession();
+  const outbox = useBenchOutbox(user);
+  const isLoaded = useSyncExternalStore(outbox.subscribe, () => outbox.getState().isLoaded);
+  return (
+    <OutboxContext.Provider value={outbox}>
+      {/* Never show the run without the writes kept on this tablet: it would look as if they were lost. */}
+      {isLoaded ? <RunScreen runId={runId} /> : <LoadingState label="Opening what is saved on this tablet…" />}
+    </OutboxContext.Provider>
+  );
+}

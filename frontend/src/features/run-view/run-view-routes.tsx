@@ -1,0 +1,27 @@
+import type { QueryClient } from '@tanstack/react-query';
+import type { RouteObject } from 'react-router';
+
+import { ROLES } from '@tracewright/shared';
+
+import type { Guard } from '../../lib/route-guard';
+
+/**
+ * The tablet run view at /run/:runId and the traveller scanner at /run/scan, outside the desk
+ * shell. Any signed-in person may open them (the guard sends others to sign in and back); the
+ * API decides who may write. Both load lazily, so the builder's and the charts' code never come
+ * with them.
+ */
+export function runViewRoutes(queryClient: QueryClient, guarded: Guard): RouteObject[] {
+  return [
+    {
+      path: 'run/scan',
+      loader: guarded(ROLES, async () => null),
+      lazy: async () => ({ Component: (await import('./routes/scan-page')).ScanPage }),
+    },
+    {
+      path: 'run/:runId',
+      loader: guarded(ROLES, async (args) => (await import('./routes/run-loader')).runLoader(queryClient)(args)),
+      lazy: async () => ({ Component: (await import('./routes/run-page')).RunPage }),
+    },
+  ];
+}
