@@ -35,6 +35,12 @@ export const ICON_PATHS = {
   trash: ['M4 7h16', 'M9 7V4h6v3', 'M6.5 7l1 13h9l1-13', 'M10.5 11v5.5', 'M13.5 11v5.5'],
   hourglass: ['M7 3h10', 'M7 21h10', 'M8 3v3.5l4 5.5l-4 5.5V21', 'M16 3v3.5L12 12l4 5.5V21'],
   drop: ['M12 3.5C9 8 6.5 11 6.5 14.5a5.5 5.5 0 0 0 11 0C17.5 11 15 8 12 3.5z'],
+  // A clipboard with a ticked line: a run and its traveller.
+  clipboard: ['M9 4h6v3H9z', 'M9 5.5H6v15h12v-15h-3', 'M9 13l2 2 4-4'],
+  // A line that climbs across a frame: trends over runs.
+  trend: ['M4 4v16h16', 'M7 15l4-4 3 3 5-6'],
+  // A clock face with a turning arrow: the history of changes.
+  history: ['M4 12a8 8 0 1 0 2.3-5.6', 'M4 4v4h4', 'M12 8v4l3 2'],
 } as const satisfies Record<string, readonly string[]>;
 
 export type IconName = keyof typeof ICON_PATHS;

@@ -9,7 +9,7 @@ import { useToast } from '../../../components/ui/use-toast';
 import { applyApiErrorToForm } from '../../../lib/form-errors';
 import { useNoteTrendPoint } from '../api/note-trend-point';
 import { valueText } from '../utils/trend-text';
-import { ModalDialog } from './modal-dialog';
+import { ModalDialog } from '../../../components/ui/modal-dialog';
 import { TextAreaField } from './text-area-field';
 
 export type PointNoteMode = 'exclude' | 'include' | 'annotate';

@@ -9,7 +9,7 @@ import { FormError } from '../../../components/ui/form-error';
 import { TextField } from '../../../components/ui/text-field';
 import { type ApiError, isApiError } from '../../../lib/api-error';
 import { applyApiErrorToForm } from '../../../lib/form-errors';
-import { ModalDialog } from './modal-dialog';
+import { ModalDialog } from '../../../components/ui/modal-dialog';
 
 const PasswordSchema = SignatureInputSchema.pick({ password: true });
 

@@ -3,6 +3,7 @@ import type { Trend } from '@tracewright/shared';
 import { Button } from '../../../components/ui/button';
 import { StatusBadge } from '../../../components/ui/status-badge';
 import { formatDateTime } from '../../../lib/format-date';
+import { figureText } from '../utils/trend-text';
 import type { PointNoteMode } from './point-note-dialog';
 
 const CELL = 'border-t border-graphite-200 px-2 py-1 align-top';
@@ -24,7 +25,7 @@ export function TrendPointRow({ point, position, rules, canEdit, onNote }: Trend
       </th>
       <td className={CODE}>{point.runCode}</td>
       <td className={CODE}>{point.pieceCode ?? '—'}</td>
-      <td className={`${CELL} text-right tabular font-bold`}>{point.value}</td>
+      <td className={`${CELL} text-right tabular font-bold`}>{figureText(point.value)}</td>
       <td className={CODE}>{formatDateTime(point.recordedAt)}</td>
       <td className={CELL}>
         {point.excluded ? <StatusBadge tone="neutral" label="Excluded" /> : <StatusBadge tone="pass" label="Included" />}

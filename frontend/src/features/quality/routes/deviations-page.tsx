@@ -3,11 +3,12 @@ import { useSearchParams } from 'react-router';
 
 import type { DeviationQuery } from '@tracewright/shared';
 
+import { deviationSearchFor } from '../utils/deviation-search';
+import { Pager } from '../../../components/ui/pager';
 import { PageHeader } from '../../../components/ui/page-header';
 import { deviationQueueQueryOptions } from '../api/get-deviation-queue';
 import { OverviewLinkCard } from '../components/overview-link-card';
 import { QueueFilterForm } from '../components/queue-filter-form';
-import { QueuePager } from '../components/queue-pager';
 import { QueueTable } from '../components/queue-table';
 import { SeverityChips } from '../components/severity-chips';
 import { StateChips } from '../components/state-chips';
@@ -35,7 +36,7 @@ export function DeviationsPage() {
         {countText(query, data.items.length, data.total)}
       </p>
       {data.items.length > 0 ? <QueueTable items={data.items} /> : null}
-      <QueuePager query={query} total={data.total} />
+      <Pager label="Pages of deviations" page={query.page} pageSize={query.pageSize} total={data.total} searchFor={(page) => deviationSearchFor({ ...query, page })} />
     </>
   );
 }

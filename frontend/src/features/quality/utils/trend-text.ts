@@ -5,8 +5,11 @@ import type { Trend } from '@tracewright/shared';
  * @example valueText(12.3456, 'Ω') // → '12.35 Ω'
  */
 export function valueText(value: number, unit: string): string {
-  return `${Number(value.toPrecision(4))} ${unit}`.trim();
+  return `${figureText(value)} ${unit}`.trim();
 }
+
+/** Four significant figures: values corrected to 20 °C carry more digits than any meter reads. */
+export const figureText = (value: number): string => String(Number(value.toPrecision(4)));
 
 /** The individuals chart in words: how many points, the centre and limits, what stands out. */
 export function individualsDescription(trend: Trend): string {

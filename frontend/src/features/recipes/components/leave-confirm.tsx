@@ -1,7 +1,7 @@
 import type { Blocker } from 'react-router';
 
 import { Button } from '../../../components/ui/button';
-import { ModalDialog } from './modal-dialog';
+import { ModalDialog } from '../../../components/ui/modal-dialog';
 
 /** Asked when someone leaves the builder with unsaved edits. */
 export function LeaveConfirm({ blocker }: { blocker: Blocker }) {

@@ -9,7 +9,7 @@ import { TextField } from '../../../components/ui/text-field';
 import { isApiError } from '../../../lib/api-error';
 import { applyApiErrorToForm } from '../../../lib/form-errors';
 import { useReleaseVersion } from '../api/release-version';
-import { ModalDialog } from './modal-dialog';
+import { ModalDialog } from '../../../components/ui/modal-dialog';
 
 type ReleaseDialogProps = { view: RecipeVersionView; signer: Session['user']; onReleased: () => void; onClose: () => void };
 

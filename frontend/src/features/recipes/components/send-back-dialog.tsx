@@ -7,7 +7,7 @@ import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
 import { applyApiErrorToForm } from '../../../lib/form-errors';
 import { useSendBackVersion } from '../api/send-back-version';
-import { ModalDialog } from './modal-dialog';
+import { ModalDialog } from '../../../components/ui/modal-dialog';
 import { TextAreaField } from './text-area-field';
 
 type SendBackDialogProps = { view: RecipeVersionView; onSentBack: () => void; onClose: () => void };

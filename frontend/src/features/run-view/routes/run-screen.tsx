@@ -66,7 +66,8 @@ export function RunScreen({ runId }: { runId: number }) {
           <RunBanners savedAt={snapshot.requestedAt} />
           <OutboxAlerts />
           <TimerTray steps={steps} currentStepId={step?.id ?? null} />
-          <main className="flex-1 px-4 py-5">{step ? <StepView key={step.id} step={step} number={index + 1} /> : <p>This recipe version has no steps.</p>}</main>
+          {/* Clip sideways: the step card slides in from the side and must not flash a scrollbar. */}
+          <main className="flex-1 overflow-x-clip px-4 py-5">{step ? <StepView key={step.id} step={step} number={index + 1} /> : <p>This recipe version has no steps.</p>}</main>
           {step ? <ActionBar step={step} previousId={steps[index - 1]?.id ?? null} nextId={steps[index + 1]?.id ?? null} onGo={goToStep} onReport={() => setOpen('report')} /> : null}
         </div>
         {open === 'steps' && step ? <StepsDrawer currentStepId={step.id} onClose={() => setOpen(null)} /> : null}

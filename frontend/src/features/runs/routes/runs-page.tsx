@@ -1,6 +1,8 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { Link, useSearchParams } from 'react-router';
 
+import { Pager } from '../../../components/ui/pager';
+import { searchFor } from '../utils/run-list-filters';
 import { Icon } from '../../../components/icons/icon';
 import { buttonClasses } from '../../../components/ui/button-styles';
 import { PageHeader } from '../../../components/ui/page-header';
@@ -8,7 +10,6 @@ import { useSession } from '../../../lib/session';
 import { runsQueryOptions } from '../api/get-runs';
 import type { RunListFilters } from '../api/run-keys';
 import { RunsFilterForm } from '../components/runs-filter-form';
-import { RunsPager } from '../components/runs-pager';
 import { RunsTable } from '../components/runs-table';
 import { RUN_PLANNERS } from '../utils/run-actions';
 import { filtersFromSearch } from '../utils/run-list-filters';
@@ -44,7 +45,7 @@ export function RunsPage() {
         {countText(filters, data.runs.length, data.total)}
       </p>
       {data.runs.length > 0 ? <RunsTable runs={data.runs} /> : null}
-      <RunsPager filters={filters} total={data.total} />
+      <Pager label="Pages of runs" page={filters.page} pageSize={filters.pageSize} total={data.total} searchFor={(page) => searchFor({ ...filters, page })} />
     </>
   );
 }
