@@ -20,11 +20,15 @@ async function planRun(): Promise<number> {
   return run.id;
 }
 
+/** Walks to a step by title: forward first, back from the end if the tablet opened past it. */
 async function goToStep(page: Page, title: string) {
-  for (let i = 0; i < 8 && !(await page.getByRole('heading', { level: 1, name: title }).isVisible()); i += 1) {
-    await page.getByRole('button', { name: 'Next step' }).click();
+  const heading = page.getByRole('heading', { level: 1, name: title });
+  let direction: 'Next step' | 'Previous step' = 'Next step';
+  for (let i = 0; i < 16 && !(await heading.isVisible()); i += 1) {
+    if (direction === 'Next step' && (await page.getByRole('button', { name: 'Next step' }).isDisabled())) direction = 'Previous step';
+    await page.getByRole('button', { name: direction }).click();
   }
-  await expect(page.getByRole('heading', { level: 1, name: title })).toBeVisible();
+  await expect(heading).toBeVisible();
 }
 
 test('when an operator runs steps on a tablet, then timers survive a reload, an out-of-limit reading raises a deviation, and an offline completion arrives once', async ({ page, context }) => {
