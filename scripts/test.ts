@@ -31,7 +31,11 @@ interface Tally {
 }
 
 async function main(): Promise<number> {
-  const only = process.argv.slice(2).find((a) => a.startsWith('--only='))?.split('=')[1];
+  const args = process.argv.slice(2);
+  const only = args.find((a) => a.startsWith('--only='))?.split('=')[1];
+  // Anything after `--` goes to Playwright as is (e.g. `npm test -- --only=e2e -- --grep offline`).
+  const dashDash = args.indexOf('--');
+  const playwrightArgs = dashDash >= 0 ? args.slice(dashDash + 1) : [];
   rmSync(REPORT_DIR, { recursive: true, force: true });
   mkdirSync(REPORT_DIR, { recursive: true });
   const db = await startThrowawayDatabase('test');
@@ -61,7 +65,7 @@ async function main(): Promise<number> {
     }
     if (only !== 'unit') {
       // The browser tests get a database of their own, seeded with the demo lab like `npm start`.
-      if ((await runBrowserTests(db.addDatabase('tracewright_e2e'), tally)) !== 0) exitCode = 1;
+      if ((await runBrowserTests(db.addDatabase('tracewright_e2e'), tally, playwrightArgs)) !== 0) exitCode = 1;
     }
   } catch (error) {
     console.error(`[test] ${error instanceof Error ? error.stack : String(error)}`);
@@ -76,7 +80,7 @@ async function main(): Promise<number> {
   return exitCode;
 }
 
-async function runBrowserTests(dbEnv: Record<string, string>, tally: Tally): Promise<number> {
+async function runBrowserTests(dbEnv: Record<string, string>, tally: Tally, extraArgs: string[]): Promise<number> {
   console.log('\n[test] Browser tests (Playwright, Debian Chromium)…');
   ensureDebianPackage(CHROMIUM, ['chromium']);
   if (!existsSync(join(FRONTEND_DIST, 'index.html')) || process.env.SKIP_BUILD !== '1') buildFrontend();
@@ -102,7 +106,7 @@ async function runBrowserTests(dbEnv: Record<string, string>, tally: Tally): Pro
   try {
     await waitForHealth(`http://127.0.0.1:${port}`, server);
     // Async on purpose: the SMTP and S3 fakes live in this process and must keep answering.
-    const status = await run(BIN('playwright'), ['test', '--config', join(ROOT, 'e2e', 'playwright.config.ts')], {
+    const status = await run(BIN('playwright'), ['test', '--config', join(ROOT, 'e2e', 'playwright.config.ts'), ...extraArgs], {
       cwd: join(ROOT, 'e2e'),
       stdio: 'inherit',
       env: {
