@@ -1,91 +1,79 @@
 /**
- * `npm run bench`: speed figures on this machine, each beside its target. Starts its own database;
- * not part of `npm test`. Exits non-zero when a budget is missed.
+ * `npm run bench`: the product's speed figures on this machine, each beside its target, in one
+ * table. Starts its own database and app; not part of `npm test`. Exits non-zero when a budget is
+ * missed or a measure fails. `-- --only=reads,writes` runs some groups (core, bundle, paint,
+ * reads, writes); `-- --build` forces a fresh frontend build.
  */
-import type { AddressInfo } from 'node:net';
-import { performance } from 'node:perf_hooks';
+import { measureBundleSizes } from './bench/bundle-sizes';
+import { startBenchStack, type BenchStack } from './bench/bench-stack';
+import { measureCore } from './bench/core-figures';
+import { figuresTable, machineLine, type Figure } from './bench/figures-table';
+import { measureFirstPaint } from './bench/first-paint';
+import { measureReadsAtSize } from './bench/reads-at-size';
+import { ensureBenchBuild } from './bench/vite-build';
+import { mountBaseline, measureWritesAb } from './bench/writes-ab';
 
-import autocannon from 'autocannon';
+const GROUPS = ['core', 'bundle', 'paint', 'reads', 'writes'] as const;
+type Group = (typeof GROUPS)[number];
 
-import { recipeChecks } from '@tracewright/shared';
-
-import { createApp } from '../backend/src/app';
-import { closeAppContext, createAppContext, migrateDatabase } from '../backend/src/bootstrap';
-import { loadEnv } from '../backend/src/config/env';
-import { createLogger } from '../backend/src/lib/logger';
-import { hashSecret } from '../backend/src/lib/secret-hashing';
-import { UserModel } from '../backend/src/models/user.model';
-import { buildFortyStepRecipe } from '../shared/src/rules/recipe/test-fixtures';
-import { startThrowawayDatabase } from './lib/test-database';
-
-interface Figure {
-  name: string;
-  value: number;
-  unit: string;
-  target: string;
-  ok: boolean;
+function parseGroups(args: readonly string[]): Set<Group> {
+  const only = args.find((a) => a.startsWith('--only='))?.slice('--only='.length);
+  if (!only) return new Set(GROUPS);
+  const asked = only.split(',').map((g) => g.trim());
+  const unknown = asked.filter((g) => !(GROUPS as readonly string[]).includes(g));
+  if (unknown.length > 0) throw new Error(`Unknown bench group ${unknown.join(', ')}; choose from ${GROUPS.join(', ')}.`);
+  return new Set(asked as Group[]);
 }
 
-/** The builder reruns every process check on each edit: time a full recheck of a 40-step recipe. */
-function measureRecipeRecheck(figures: Figure[]) {
-  const input = buildFortyStepRecipe();
-  for (let i = 0; i < 200; i += 1) recipeChecks(input); // warm-up: let the JIT settle
-  const rounds = 2_000;
-  const started = performance.now();
-  for (let i = 0; i < rounds; i += 1) recipeChecks(input);
-  const perRecheck = (performance.now() - started) / rounds;
-  figures.push({ name: `recipe recheck, ${input.steps.length} steps (mean of ${rounds})`, value: perRecheck, unit: 'ms', target: '≤ 5 ms', ok: perRecheck <= 5 });
-}
-
-async function main() {
-  const figures: Figure[] = [];
-  measureRecipeRecheck(figures);
-  const db = await startThrowawayDatabase('bench');
+/** Runs one group; a crash becomes a failed figure so the table still prints. */
+async function step(figures: Figure[], group: Group, measure: () => Promise<Figure[]>) {
+  console.log(`[bench] ${group}…`);
   try {
-    const env = loadEnv({ ...db.env, JWT_SECRET: 'bench-'.padEnd(48, 'x'), LOG_LEVEL: 'silent', DB_POOL_MAX: '20', SIGN_IN_LIMIT: '100000' });
-    await migrateDatabase(env);
-    const ctx = createAppContext(env, createLogger('silent'));
-    const server = createApp(ctx).listen(0, '127.0.0.1');
-    await new Promise((resolve) => server.once('listening', resolve));
-    const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+    figures.push(...(await measure()));
+  } catch (error) {
+    console.error(`[bench] ${group} failed: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}`);
+    figures.push({ group, name: `${group} could not be measured (see above)`, value: Number.NaN, unit: '', target: 'runs', ok: false });
+  }
+}
 
-    // Password hashing: the cost every sign-in pays (argon2id, OWASP minimum parameters).
-    const hashes = 10;
-    const started = performance.now();
-    for (let i = 0; i < hashes; i += 1) await hashSecret(`bench-password-${i}`);
-    const perHash = (performance.now() - started) / hashes;
-    figures.push({ name: 'argon2id hash (m=19 MiB, t=2)', value: perHash, unit: 'ms', target: '≤ 250 ms', ok: perHash <= 250 });
-
-    await UserModel.create({ email: 'bench@lab.example', name: 'Bench', role: 'engineer', status: 'active', passwordHash: await hashSecret('bench-password') });
-    const signIn = await fetch(`${base}/api/auth/sign-in`, {
-      method: 'POST',
-      headers: { 'content-type': 'application/json' },
-      body: JSON.stringify({ email: 'bench@lab.example', password: 'bench-password' }),
+async function main(): Promise<number> {
+  const args = process.argv.slice(2);
+  const groups = parseGroups(args);
+  console.log(machineLine());
+  const figures: Figure[] = [];
+  if (groups.has('core')) await step(figures, 'core', measureCore);
+  // The build runs before the database starts, so the two do not share the 2 cores.
+  const dist = groups.has('bundle') || groups.has('paint') ? await ensureBenchBuild(args.includes('--build')) : undefined;
+  if (groups.has('bundle') && dist) await step(figures, 'bundle', () => measureBundleSizes(dist));
+  const needsStack = groups.has('paint') || groups.has('reads') || groups.has('writes');
+  let stack: BenchStack | undefined;
+  // Ctrl-C must not leave a database server behind.
+  for (const signal of ['SIGINT', 'SIGTERM'] as const) {
+    process.once(signal, () => {
+      console.error(`\n[bench] ${signal}: stopping what the bench started…`);
+      void (stack?.stop() ?? Promise.resolve()).finally(() => process.exit(130));
     });
-    const cookie = signIn.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
-
-    // An authenticated read: token check + user row per request, the floor under every API call.
-    const result = await autocannon({ url: `${base}/api/auth/session`, connections: 20, duration: 10, headers: { cookie } });
-    figures.push({ name: 'GET /api/auth/session req/s (20 connections)', value: result.requests.average, unit: 'req/s', target: '≥ 500', ok: result.requests.average >= 500 });
-    figures.push({ name: 'GET /api/auth/session p97.5 latency', value: result.latency.p97_5, unit: 'ms', target: '≤ 50 ms', ok: result.latency.p97_5 <= 50 });
-    figures.push({ name: 'non-2xx responses', value: result.non2xx, unit: '', target: '0', ok: result.non2xx === 0 });
-
-    server.close();
-    await closeAppContext(ctx);
+  }
+  try {
+    if (needsStack) stack = await startBenchStack({ staticDir: dist?.dir, benchRoutes: mountBaseline });
+    const running = stack;
+    // Paint first: it needs only the demo run, and must not share the CPU with seeding or load.
+    if (running && groups.has('paint') && dist) await step(figures, 'paint', () => measureFirstPaint(running));
+    if (running && groups.has('reads')) await step(figures, 'reads', () => measureReadsAtSize(running));
+    if (running && groups.has('writes')) await step(figures, 'writes', () => measureWritesAb(running));
   } finally {
-    await db.stop();
+    await stack?.stop();
   }
-  printTable(figures);
-  process.exit(figures.every((f) => f.ok) ? 0 : 1);
+  console.log(`\n${machineLine()}\n\n${figuresTable(figures)}`);
+  const missed = figures.filter((f) => !f.ok);
+  console.log(missed.length === 0 ? '\nEvery budget met.' : `\n${missed.length} budget(s) missed.`);
+  return missed.length === 0 ? 0 : 1;
 }
 
-function printTable(figures: Figure[]) {
-  const width = Math.max(...figures.map((f) => f.name.length));
-  console.log(`\n${'measure'.padEnd(width)}  ${'value'.padStart(10)}  target      result`);
-  for (const f of figures) {
-    const value = `${f.value.toFixed(f.value < 10 ? 2 : 0)} ${f.unit}`.trim();
-    console.log(`${f.name.padEnd(width)}  ${value.padStart(10)}  ${f.target.padEnd(10)}  ${f.ok ? 'met' : 'MISSED'}`);
-  }
-}
-
-void main();
+main().then(
+  (code) => process.exit(code),
+  (error: unknown) => {
+    console.error(`[bench] ${error instanceof Error ? (error.stack ?? error.message) : String(error)}`);
+    process.exit(1);
+  },
+);

@@ -1,12 +1,14 @@
 /**
- * `npm test`: a throwaway MariaDB, then unit + API tests (Vitest), then browser tests (Playwright
- * in Debian's Chromium) against the built app with its own fakes. Everything is stopped after;
- * the exit code is non-zero when anything failed.
+ * `npm test`: a throwaway MariaDB, then unit + API tests (Vitest), then database-kill rounds
+ * (scripts/faults), then browser tests (Playwright in Debian's Chromium) against the built app
+ * with its own fakes. Everything is stopped after; the exit code is non-zero when anything failed.
+ * `--only=unit|faults|e2e` runs one phase.
  */
 import { spawn, spawnSync, type SpawnOptions } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 
+import { runFaultPhase } from './faults/fault-phase';
 import { buildFrontend, spawnServer, startFakes, stopChild, waitForHealth } from './lib/app-stack';
 import { ensureDebianPackage } from './lib/debian-packages';
 import { freePort } from './lib/free-port';
@@ -18,6 +20,8 @@ import { startThrowawayDatabase } from './lib/test-database';
 const QUIET_SDK = { AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true' };
 const REPORT_DIR = join(ROOT, '.tmp', 'test-reports');
 const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+/** Database-kill rounds in `npm test`; `npm run test:long` runs 20. */
+const FAULT_ROUNDS = 3;
 
 const STATIC_CHECKS: Array<[string, string, string[]]> = [
   ...['.', 'shared', 'backend', 'frontend', 'e2e'].map((p): [string, string, string[]] => [`typecheck ${p}`, 'tsc', ['-p', p, '--noEmit']]),
@@ -53,7 +57,7 @@ async function main(): Promise<number> {
         }
       }
     }
-    if (only !== 'e2e') {
+    if (!only || only === 'unit') {
       console.log('\n[test] Unit and API tests (Vitest)…');
       const vitest = spawnSync(
         BIN('vitest'),
@@ -63,7 +67,14 @@ async function main(): Promise<number> {
       addVitest(tally, join(REPORT_DIR, 'vitest.json'));
       if (vitest.status !== 0) exitCode = 1;
     }
-    if (only !== 'unit') {
+    if (!only || only === 'faults') {
+      // Its own MariaDB and server, since it kills the database: see scripts/faults/db-kill.ts.
+      const faults = runFaultPhase(FAULT_ROUNDS, join(REPORT_DIR, 'faults.json'));
+      tally.passed += faults.passed;
+      tally.failed += faults.failed;
+      if (faults.failed > 0) exitCode = 1;
+    }
+    if (!only || only === 'e2e') {
       // The browser tests get a database of their own, seeded with the demo lab like `npm start`.
       if ((await runBrowserTests(db.addDatabase('tracewright_e2e'), tally, playwrightArgs)) !== 0) exitCode = 1;
     }

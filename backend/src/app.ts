@@ -2,11 +2,16 @@ import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 
 import cookieParser from 'cookie-parser';
+import compression from 'compression';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 
 import type { AppContext } from './app-context';
 import { notFound } from './errors/app-error';
+import { limitJsonDepth } from './lib/json-depth';
+import { requestLog } from './lib/request-log';
+import { refuseBrokenText } from './lib/well-formed-text';
+import { strictTransportSecurity } from './lib/transport-security';
 import { errorHandler } from './middleware/error-handler';
 import { auditRoutes } from './routes/audit.routes';
 import { authRoutes } from './routes/auth.routes';
@@ -49,11 +54,18 @@ export function createApp(ctx: AppContext): Express {
           'upgrade-insecure-requests': null,
         },
       },
-      // HSTS only means something behind TLS; on plain http it would be ignored or misleading.
-      strictTransportSecurity: ctx.env.PUBLIC_URL.startsWith('https://'),
+      // Sent below, per request: only a response that travelled over TLS may carry it.
+      strictTransportSecurity: false,
     }),
   );
+  app.use(strictTransportSecurity);
+  // gzip for text answers (JS, CSS, JSON): a tablet on weak Wi-Fi loads the run view several times faster.
+  app.use(compression());
+  // Read per request, so a test (or a reload) may swap the logger on the context.
+  app.use('/api', requestLog(() => ctx.logger));
   app.use(express.json({ limit: '200kb' }));
+  app.use(limitJsonDepth);
+  app.use(refuseBrokenText);
   app.use(cookieParser());
 
   mountRoutes(app, ctx, [

@@ -1,24 +1,21 @@
 import { expect, test } from '@playwright/test';
 
 import { apiAs } from '../fixtures/api';
-import { DEMO_PASSWORD, demoEmail, SCREENSHOTS } from '../fixtures/demo';
+import { DEMO_PASSWORD, demoName, SCREENSHOTS } from '../fixtures/demo';
+import { completeEveryStep, planTouchStripRun } from '../fixtures/runs';
+import { signIn } from '../fixtures/sign-in';
 
-test('when quality filters the queue and opens an operator’s deviation, then it is dispositioned with a signature, and the trend shows its spec', async ({ page }) => {
-  // An operator reports a problem on the demo run, as the tablet would.
+test('when quality filters the queue and dispositions an operator’s deviation, then the run is signed off with a signature shown on its record, and the trend shows its spec', async ({ page }) => {
+  // A fresh run: the operator reports a problem on it, then finishes every step, as the tablet would.
+  const run = await planTouchStripRun();
   const { api, post } = await apiAs('operator');
-  const { runs } = (await (await api.get('/api/runs')).json()) as { runs: Array<{ id: number; code: string }> };
-  const run = runs[runs.length - 1];
-  if (!run) throw new Error('the demo lab seeds a run');
   const stamp = `mark${Date.now()}`;
   const title = `Smudge on key 2, ${stamp}`;
   await post(`/api/runs/${run.id}/problems`, { description: title, severity: 'minor', pieceIds: [] });
   await api.dispose();
+  await completeEveryStep(run.id);
 
-  await page.goto('/sign-in');
-  await page.getByLabel('E-mail').fill(demoEmail('quality'));
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await expect(page.getByRole('heading', { name: /Welcome/ })).toBeVisible();
+  await signIn(page, 'quality');
 
   // The queue, filtered to minor deviations and the reported text.
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Deviations' }).click();
@@ -42,6 +39,35 @@ test('when quality filters the queue and opens an operator’s deviation, then i
   await expect(page.getByText('Dispositioned', { exact: true }).first()).toBeVisible();
   await expect(page.getByText(/Cosmetic mark outside the sensing area/).first()).toBeVisible();
   await page.screenshot({ path: `${SCREENSHOTS}quality-02-dispositioned.png`, fullPage: true });
+
+  // The overview lists the finished run as awaiting sign-off, every deviation decided; its record opens from there.
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Deviations' }).click();
+  await page.getByRole('link', { name: /Quality overview/ }).click();
+  const awaiting = page.getByRole('region', { name: 'Runs awaiting sign-off' });
+  const row = awaiting.getByRole('row').filter({ has: page.getByRole('link', { name: run.code, exact: true }) });
+  await expect(row.getByText('All decided')).toBeVisible();
+  await row.getByRole('link', { name: run.code, exact: true }).click();
+  await expect(page.getByRole('heading', { level: 1, name: `Run ${run.code}` })).toBeVisible();
+
+  // Sign-off: the password again, then the record shows the signature's name, date and time, and meaning.
+  const signOff = page.getByRole('region', { name: 'Quality sign-off' });
+  await signOff.getByRole('button', { name: 'Sign off run…' }).click();
+  const signDialog = page.getByRole('dialog', { name: `Sign off run ${run.code}` });
+  await signDialog.getByLabel('Your password').fill(DEMO_PASSWORD);
+  await signDialog.getByRole('button', { name: 'Sign off run' }).click();
+  await expect(signDialog).toBeHidden();
+  const manifest = signOff.getByRole('definition');
+  await expect(manifest.filter({ hasText: demoName('quality') })).toHaveCount(1);
+  await expect(manifest.filter({ hasText: 'run record approved' })).toHaveCount(1);
+  await expect(manifest.filter({ hasText: /^\d{4}-\d\d-\d\d \d\d:\d\d/ })).toHaveCount(1);
+  await expect(page.getByText('Closed', { exact: true }).first()).toBeVisible();
+  await page.screenshot({ path: `${SCREENSHOTS}quality-04-signed-off.png`, fullPage: true });
+
+  // The server holds one sign-off of this run, and the run is closed.
+  const { api: quality } = await apiAs('quality');
+  const view = (await (await quality.get(`/api/runs/${run.id}/sign-off`)).json()) as { runState: string; signature: { signedBy: string; meaning: string } | null };
+  await quality.dispose();
+  expect(view).toMatchObject({ runState: 'closed', signature: { signedBy: demoName('quality'), meaning: 'run record approved' } });
 
   // The trend of a reading spec of the same recipe, with its capability figures.
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Trends' }).click();

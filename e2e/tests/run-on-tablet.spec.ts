@@ -20,13 +20,21 @@ async function planRun(): Promise<number> {
   return run.id;
 }
 
-/** Walks to a step by title: forward first, back from the end if the tablet opened past it. */
+/**
+ * Walks to a step by title: forward first, back from the end if the tablet opened past it. Each
+ * move is a navigation (the step is in the address), so it waits for "Step n of N" to change
+ * before looking again: a slow loader must not make it walk past the step unseen.
+ */
 async function goToStep(page: Page, title: string) {
   const heading = page.getByRole('heading', { level: 1, name: title });
+  const position = page.getByRole('banner').getByText(/^Step \d+ of \d+$/);
   let direction: 'Next step' | 'Previous step' = 'Next step';
-  for (let i = 0; i < 16 && !(await heading.isVisible()); i += 1) {
+  for (let i = 0; i < 16; i += 1) {
+    const before = await position.textContent();
+    if (await heading.isVisible()) return;
     if (direction === 'Next step' && (await page.getByRole('button', { name: 'Next step' }).isDisabled())) direction = 'Previous step';
     await page.getByRole('button', { name: direction }).click();
+    await expect(position).not.toHaveText(before ?? '');
   }
   await expect(heading).toBeVisible();
 }

@@ -7,6 +7,7 @@ import { RouterProvider } from 'react-router/dom';
 
 import { AppProvider } from './app/provider';
 import { createAppRouter } from './app/router';
+import { cacheSessionForOffline } from './lib/offline-session';
 import { createQueryClient } from './lib/query-client';
 
 const queryClient = createQueryClient();
@@ -26,6 +27,8 @@ createRoot(container).render(
 // The service worker keeps the app and the run a tablet works on available without a network.
 // Production builds only: in development it would cache what is being edited.
 if (import.meta.env.PROD) {
+  // The first time the worker takes control, the session this page already holds is not in its cache.
+  navigator.serviceWorker?.addEventListener('controllerchange', cacheSessionForOffline);
   void import('virtual:pwa-register').then(({ registerSW }) =>
     registerSW({
       immediate: true,

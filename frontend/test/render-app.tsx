@@ -3,7 +3,7 @@ import userEvent from '@testing-library/user-event';
 import { createMemoryRouter, RouterProvider } from 'react-router';
 
 import { AppProvider } from '../src/app/provider';
-import { createRoutes } from '../src/app/routes';
+import { createRoutes, deskRouterOptions } from '../src/app/routes';
 import { redirectOnUnauthenticated } from '../src/app/unauthenticated-redirect';
 import { createQueryClient } from '../src/lib/query-client';
 
@@ -13,7 +13,7 @@ import { createQueryClient } from '../src/lib/query-client';
  */
 export function renderApp(path: string) {
   const queryClient = createQueryClient({ queries: { retry: false }, mutations: { retry: false } });
-  const router = createMemoryRouter(createRoutes(queryClient), { initialEntries: [path] });
+  const router = createMemoryRouter(createRoutes(queryClient), { initialEntries: [path], ...deskRouterOptions(queryClient) });
   redirectOnUnauthenticated(queryClient, router);
   const user = userEvent.setup();
   const view = render(

@@ -99,6 +99,7 @@ export async function startMariadb(options: { baseDir: string; port: number; reu
     '--max-connections=200',
     '--skip-log-bin',
     '--default-time-zone=+00:00',
+    '--innodb-ft-min-token-size=2', // the deviation queue finds 2-letter words such as "Ag" through its FULLTEXT index
   ];
   let child = await launch(args, socket, runDir);
 
@@ -109,20 +110,25 @@ export async function startMariadb(options: { baseDir: string; port: number; reu
     rootSql,
     process: () => child,
     async restart() {
+      // Same port, socket and data folder. The old process must be gone first (even one just sent
+      // SIGKILL): a second mariadbd on the same data folder fails on InnoDB's file lock.
+      await shutDown(child, socket);
       child = await launch(args, socket, runDir);
     },
-    async stop() {
-      if (child.exitCode !== null || child.signalCode !== null) return;
-      const exited = new Promise((done) => child.once('exit', done));
-      try {
-        execFileSync(ADMIN, ['--no-defaults', `--socket=${socket}`, '-uroot', 'shutdown'], { stdio: 'pipe' });
-      } catch {
-        child.kill('SIGTERM');
-      }
-      // mariadb-admin returns before the server has exited: wait on the process itself.
-      await Promise.race([exited, sleep(30_000, undefined, { ref: false })]);
-    },
+    stop: () => shutDown(child, socket),
   };
+}
+
+async function shutDown(child: ChildProcess, socket: string): Promise<void> {
+  if (child.exitCode !== null || child.signalCode !== null) return;
+  const exited = new Promise((done) => child.once('exit', done));
+  try {
+    execFileSync(ADMIN, ['--no-defaults', `--socket=${socket}`, '-uroot', 'shutdown'], { stdio: 'pipe' });
+  } catch {
+    child.kill('SIGTERM');
+  }
+  // mariadb-admin returns before the server has exited: wait on the process itself.
+  await Promise.race([exited, sleep(30_000, undefined, { ref: false })]);
 }
 
 async function launch(args: string[], socket: string, runDir: string): Promise<ChildProcess> {

@@ -30,3 +30,4 @@ export * from './schemas/run-writes.schema';
 export * from './rules/quality';
 export * from './schemas/quality-views.schema';
 export * from './schemas/audit-search.schema';
+export * from './rules/permissions';

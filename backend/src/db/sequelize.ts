@@ -17,8 +17,10 @@ export function createSequelize(env: Env, as: 'app' | 'owner' = 'app'): Sequeliz
     dialectModule: mariadb,
     logging: false,
     timezone: '+00:00',
-    pool: { max: as === 'owner' ? 2 : env.DB_POOL_MAX, min: 0, acquire: 10_000, idle: 10_000 },
-    dialectOptions: { connectTimeout: 5_000 },
+    // Short waits so a request meets a dead or restarting database with a quick 503 (never a hang):
+    // a connection normally takes milliseconds, and a wait for a free one is short unless overloaded.
+    pool: { max: as === 'owner' ? 2 : env.DB_POOL_MAX, min: 0, acquire: 5_000, idle: 10_000 },
+    dialectOptions: { connectTimeout: 3_000 },
     define: { underscored: true },
   });
 }

@@ -1,14 +1,11 @@
 import type { z } from 'zod';
 
-import { ArchiveInputSchema, CatalogueQuerySchema, IdParamsSchema, type Role } from '@tracewright/shared';
+import { ArchiveInputSchema, CatalogueQuerySchema, IdParamsSchema, PERMISSIONS } from '@tracewright/shared';
 
 import type { AppContext } from '../app-context';
 import { currentUser } from '../middleware/authenticate';
 import type { Catalogue } from '../services/catalogue.service';
 import { route, type RouteSpec } from './route-table';
-
-/** Engineers keep the catalogues; admins may step in. Everyone signed in reads them. */
-export const CATALOGUE_WRITERS: readonly Role[] = ['engineer', 'admin'];
 
 export interface CatalogueRoutesSpec<In, View> {
   /** e.g. '/api/heat-sources' */
@@ -24,7 +21,7 @@ export interface CatalogueRoutesSpec<In, View> {
 export function catalogueRoutes<In, View>(ctx: AppContext, spec: CatalogueRoutesSpec<In, View>): RouteSpec[] {
   const { path, listKey, catalogue } = spec;
   const setArchived = (archived: boolean) =>
-    route('post', `${path}/:id/${archived ? 'archive' : 'restore'}`, CATALOGUE_WRITERS, async (req, res) => {
+    route('post', `${path}/:id/${archived ? 'archive' : 'restore'}`, PERMISSIONS.editCatalogue, async (req, res) => {
       const { id } = IdParamsSchema.parse(req.params);
       // A bare POST carries no body; the version is optional here.
       res.json(await catalogue.setArchived(ctx, currentUser(req), id, archived, ArchiveInputSchema.parse(req.body ?? {})));
@@ -36,10 +33,10 @@ export function catalogueRoutes<In, View>(ctx: AppContext, spec: CatalogueRoutes
     route('get', `${path}/:id`, 'signed-in', async (req, res) => {
       res.json(await catalogue.get(ctx, IdParamsSchema.parse(req.params).id));
     }),
-    route('post', path, CATALOGUE_WRITERS, async (req, res) => {
+    route('post', path, PERMISSIONS.editCatalogue, async (req, res) => {
       res.status(201).json(await catalogue.create(ctx, currentUser(req), spec.inputSchema.parse(req.body)));
     }),
-    route('put', `${path}/:id`, CATALOGUE_WRITERS, async (req, res) => {
+    route('put', `${path}/:id`, PERMISSIONS.editCatalogue, async (req, res) => {
       const { id } = IdParamsSchema.parse(req.params);
       res.json(await catalogue.update(ctx, currentUser(req), id, spec.updateSchema.parse(req.body)));
     }),

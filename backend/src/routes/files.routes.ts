@@ -2,7 +2,7 @@ import { createHash } from 'node:crypto';
 
 import type { Response } from 'express';
 
-import { IdParamsSchema } from '@tracewright/shared';
+import { IdParamsSchema, PERMISSIONS } from '@tracewright/shared';
 import { ARTWORK_MAX_BYTES, type StoredFile } from '@tracewright/shared';
 import { PHOTO_MAX_BYTES } from '@tracewright/shared';
 
@@ -11,9 +11,7 @@ import { readSingleFile } from '../lib/upload-parser';
 import { currentUser } from '../middleware/authenticate';
 import { sendWrite, tabletWrite } from '../middleware/idempotency';
 import { readStoredFile, uploadArtwork, uploadPhoto } from '../services/stored-file.service';
-import { RECIPE_AUTHORS } from './recipes.routes';
 import { route, type RouteSpec } from './route-table';
-import { RUN_CREW } from './runs.routes';
 
 /** Types a browser may show in place; anything else (PDF) is offered as a download. */
 const SHOWN_INLINE = new Set(['image/png', 'image/svg+xml', 'image/jpeg', 'image/webp']);
@@ -34,11 +32,11 @@ function sendStoredFile(res: Response, file: StoredFile, bytes: Buffer) {
 
 export function fileRoutes(ctx: AppContext): RouteSpec[] {
   return [
-    route('post', '/api/files/artwork', RECIPE_AUTHORS, async (req, res) => {
+    route('post', '/api/files/artwork', PERMISSIONS.authorRecipes, async (req, res) => {
       const file = await readSingleFile(req, res, 'file', ARTWORK_MAX_BYTES);
       res.status(201).json(await uploadArtwork(ctx, currentUser(req), file));
     }),
-    route('post', '/api/files/photos', RUN_CREW, async (req, res) => {
+    route('post', '/api/files/photos', PERMISSIONS.workRuns, async (req, res) => {
       const file = await readSingleFile(req, res, 'file', PHOTO_MAX_BYTES, 'Take it again at a lower resolution, or send it as JPEG.');
       // The bytes are what make a retried upload the same one (multipart framing differs per attempt).
       const fingerprint = file ? createHash('sha256').update(file.buffer).digest('hex') : null;

@@ -1,4 +1,4 @@
-import { IdParamsSchema, SaveDraftInputSchema, type Role } from '@tracewright/shared';
+import { IdParamsSchema, SaveDraftInputSchema, PERMISSIONS } from '@tracewright/shared';
 import { SendBackInputSchema, VersionDiffQuerySchema } from '@tracewright/shared';
 import { ReleaseVersionInputSchema } from '@tracewright/shared';
 
@@ -7,11 +7,7 @@ import { currentUser } from '../middleware/authenticate';
 import { signatureLimiter } from '../middleware/rate-limits';
 import * as review from '../services/recipe-review.service';
 import * as versions from '../services/recipe-version.service';
-import { RECIPE_AUTHORS } from './recipes.routes';
 import { route, type RouteSpec } from './route-table';
-
-/** "Quality approves and releases": admins manage people, they do not sign recipes off. */
-export const RECIPE_REVIEWERS: readonly Role[] = ['quality'];
 
 export function recipeVersionRoutes(ctx: AppContext): RouteSpec[] {
   const idOf = (params: unknown) => IdParamsSchema.parse(params).id;
@@ -19,20 +15,20 @@ export function recipeVersionRoutes(ctx: AppContext): RouteSpec[] {
     route('get', '/api/recipe-versions/:id', 'signed-in', async (req, res) => {
       res.json(await versions.getVersion(idOf(req.params)));
     }),
-    route('put', '/api/recipe-versions/:id', RECIPE_AUTHORS, async (req, res) => {
+    route('put', '/api/recipe-versions/:id', PERMISSIONS.authorRecipes, async (req, res) => {
       res.json(await versions.saveDraft(ctx, currentUser(req), idOf(req.params), SaveDraftInputSchema.parse(req.body)));
     }),
     route('get', '/api/recipe-versions/:id/diff', 'signed-in', async (req, res) => {
       res.json(await versions.diffVersions(idOf(req.params), VersionDiffQuerySchema.parse(req.query).against));
     }),
-    route('post', '/api/recipe-versions/:id/submit', RECIPE_AUTHORS, async (req, res) => {
+    route('post', '/api/recipe-versions/:id/submit', PERMISSIONS.authorRecipes, async (req, res) => {
       res.json(await review.submitVersion(ctx, currentUser(req), idOf(req.params)));
     }),
-    route('post', '/api/recipe-versions/:id/release', RECIPE_REVIEWERS, async (req, res) => {
+    route('post', '/api/recipe-versions/:id/release', PERMISSIONS.reviewRecipes, async (req, res) => {
       const input = ReleaseVersionInputSchema.parse(req.body);
       res.json(await review.releaseVersion(ctx, currentUser(req), idOf(req.params), input, req.ip ?? null));
     }, [signatureLimiter(ctx)]),
-    route('post', '/api/recipe-versions/:id/send-back', RECIPE_REVIEWERS, async (req, res) => {
+    route('post', '/api/recipe-versions/:id/send-back', PERMISSIONS.reviewRecipes, async (req, res) => {
       res.json(await review.sendBackVersion(ctx, currentUser(req), idOf(req.params), SendBackInputSchema.parse(req.body)));
     }),
   ];

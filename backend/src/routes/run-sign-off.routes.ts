@@ -1,10 +1,9 @@
-import { IdParamsSchema, RunSignOffInputSchema } from '@tracewright/shared';
+import { IdParamsSchema, RunSignOffInputSchema, PERMISSIONS } from '@tracewright/shared';
 
 import type { AppContext } from '../app-context';
 import { currentUser } from '../middleware/authenticate';
 import { signatureLimiter } from '../middleware/rate-limits';
 import { getRunSignOff, signOffRun } from '../services/run-sign-off.service';
-import { QUALITY_WRITERS } from './deviations.routes';
 import { route, type RouteSpec } from './route-table';
 
 /**
@@ -17,7 +16,7 @@ export function runSignOffRoutes(ctx: AppContext): RouteSpec[] {
     route('get', '/api/runs/:id/sign-off', 'signed-in', async (req, res) => {
       res.json(await getRunSignOff(idOf(req.params)));
     }),
-    route('post', '/api/runs/:id/sign-off', QUALITY_WRITERS, async (req, res) => {
+    route('post', '/api/runs/:id/sign-off', PERMISSIONS.decideQuality, async (req, res) => {
       const input = RunSignOffInputSchema.parse(req.body);
       res.json(await signOffRun(ctx, currentUser(req), idOf(req.params), input, req.ip ?? null));
     }, [signatureLimiter(ctx)]),

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-import { CompleteStepInputSchema, DeviceStampSchema, IdParamsSchema, IdSchema, StartTimerInputSchema, StepIdSchema } from '@tracewright/shared';
+import { CompleteStepInputSchema, DeviceStampSchema, IdParamsSchema, IdSchema, StartTimerInputSchema, StepIdSchema, PERMISSIONS } from '@tracewright/shared';
 import { StepNotDoneInputSchema, StopTimerInputSchema } from '@tracewright/shared';
 
 import type { AppContext } from '../app-context';
@@ -8,7 +8,6 @@ import { sendWrite, tabletWrite } from '../middleware/idempotency';
 import * as steps from '../services/run-steps.service';
 import * as timers from '../services/run-timers.service';
 import { route, type RouteSpec } from './route-table';
-import { RUN_CREW } from './runs.routes';
 
 const StepParamsSchema = z.object({ id: IdSchema, stepId: StepIdSchema });
 const TimerParamsSchema = z.object({ id: IdSchema, timerId: IdSchema });
@@ -17,27 +16,27 @@ const TimerParamsSchema = z.object({ id: IdSchema, timerId: IdSchema });
 export function runStepRoutes(ctx: AppContext): RouteSpec[] {
   const at = (req: { params: unknown }) => StepParamsSchema.parse(req.params);
   return [
-    route('post', '/api/runs/:id/steps/:stepId/acknowledge-safety', RUN_CREW, async (req, res) => {
+    route('post', '/api/runs/:id/steps/:stepId/acknowledge-safety', PERMISSIONS.workRuns, async (req, res) => {
       const { id, stepId } = at(req);
       sendWrite(res, await steps.acknowledgeSafety(ctx, tabletWrite(req), id, stepId, DeviceStampSchema.parse(req.body ?? {})));
     }),
-    route('post', '/api/runs/:id/steps/:stepId/start', RUN_CREW, async (req, res) => {
+    route('post', '/api/runs/:id/steps/:stepId/start', PERMISSIONS.workRuns, async (req, res) => {
       const { id, stepId } = at(req);
       sendWrite(res, await steps.startStep(ctx, tabletWrite(req), id, stepId, DeviceStampSchema.parse(req.body ?? {})));
     }),
-    route('post', '/api/runs/:id/steps/:stepId/complete', RUN_CREW, async (req, res) => {
+    route('post', '/api/runs/:id/steps/:stepId/complete', PERMISSIONS.workRuns, async (req, res) => {
       const { id, stepId } = at(req);
       sendWrite(res, await steps.completeStep(ctx, tabletWrite(req), id, stepId, CompleteStepInputSchema.parse(req.body ?? {})));
     }),
-    route('post', '/api/runs/:id/steps/:stepId/not-done', RUN_CREW, async (req, res) => {
+    route('post', '/api/runs/:id/steps/:stepId/not-done', PERMISSIONS.workRuns, async (req, res) => {
       const { id, stepId } = at(req);
       sendWrite(res, await steps.markStepNotDone(ctx, tabletWrite(req), id, stepId, StepNotDoneInputSchema.parse(req.body)));
     }),
-    route('post', '/api/runs/:id/timers', RUN_CREW, async (req, res) => {
+    route('post', '/api/runs/:id/timers', PERMISSIONS.workRuns, async (req, res) => {
       const { id } = IdParamsSchema.parse(req.params);
       sendWrite(res, await timers.startTimer(ctx, tabletWrite(req), id, StartTimerInputSchema.parse(req.body)));
     }),
-    route('post', '/api/runs/:id/timers/:timerId/stop', RUN_CREW, async (req, res) => {
+    route('post', '/api/runs/:id/timers/:timerId/stop', PERMISSIONS.workRuns, async (req, res) => {
       const { id, timerId } = TimerParamsSchema.parse(req.params);
       sendWrite(res, await timers.stopTimer(ctx, tabletWrite(req), id, timerId, StopTimerInputSchema.parse(req.body ?? {})));
     }),

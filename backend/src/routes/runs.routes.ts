@@ -1,4 +1,4 @@
-import { IdParamsSchema, PlanRunInputSchema, RunStateChangeSchema, type Role } from '@tracewright/shared';
+import { IdParamsSchema, PlanRunInputSchema, RunStateChangeSchema, PERMISSIONS } from '@tracewright/shared';
 import { RunListQuerySchema } from '@tracewright/shared';
 
 import type { AppContext } from '../app-context';
@@ -10,16 +10,10 @@ import { exportReadings } from '../services/run-readings-export';
 import { changeRunState, type RunStateAction } from '../services/run-state.service';
 import { route, type RouteSpec } from './route-table';
 
-/** Who plans runs and holds, resumes or cancels them. */
-export const RUN_PLANNERS: readonly Role[] = ['engineer', 'quality', 'admin'];
-
-/** Who records on a run's tablet: operators execute runs; the others step in at the bench. */
-export const RUN_CREW: readonly Role[] = ['operator', 'engineer', 'quality', 'admin'];
-
 export function runRoutes(ctx: AppContext): RouteSpec[] {
   const idOf = (params: unknown) => IdParamsSchema.parse(params).id;
   const stateChange = (action: RunStateAction) =>
-    route('post', `/api/runs/:id/${action}`, RUN_PLANNERS, async (req, res) => {
+    route('post', `/api/runs/:id/${action}`, PERMISSIONS.planRuns, async (req, res) => {
       const { reason } = RunStateChangeSchema.parse(req.body);
       res.json(await changeRunState(ctx, currentUser(req), idOf(req.params), action, reason));
     });
@@ -27,7 +21,7 @@ export function runRoutes(ctx: AppContext): RouteSpec[] {
     route('get', '/api/runs', 'signed-in', async (req, res) => {
       res.json(await listRuns(RunListQuerySchema.parse(req.query)));
     }),
-    route('post', '/api/runs', RUN_PLANNERS, async (req, res) => {
+    route('post', '/api/runs', PERMISSIONS.planRuns, async (req, res) => {
       res.status(201).json(await planRun(ctx, currentUser(req), PlanRunInputSchema.parse(req.body)));
     }),
     route('get', '/api/runs/:id', 'signed-in', async (req, res) => {

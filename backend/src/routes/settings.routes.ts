@@ -1,4 +1,4 @@
-import { LabSettingsSchema } from '@tracewright/shared';
+import { LabSettingsSchema, PERMISSIONS } from '@tracewright/shared';
 
 import type { AppContext } from '../app-context';
 import { currentUser } from '../middleware/authenticate';
@@ -10,7 +10,7 @@ export function settingsRoutes(ctx: AppContext): RouteSpec[] {
     route('get', '/api/settings', 'signed-in', async (_req, res) => {
       res.json(await getLabSettings());
     }),
-    route('put', '/api/settings', ['admin'], async (req, res) => {
+    route('put', '/api/settings', PERMISSIONS.manageSettings, async (req, res) => {
       res.json(await updateLabSettings(ctx, currentUser(req).id, LabSettingsSchema.parse(req.body)));
     }),
   ];

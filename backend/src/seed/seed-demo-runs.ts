@@ -1,6 +1,7 @@
 import type { Transaction } from 'sequelize';
 
 import { deviationDraft, evaluateReading, pieceCodes, type DraftContent, type Ink } from '@tracewright/shared';
+import { versionMachines } from '@tracewright/shared';
 
 import type { AppContext } from '../app-context';
 import { InkModel } from '../models/ink.model';
@@ -21,7 +22,6 @@ import { raiseDeviation } from '../services/deviation.service';
 import { toInkDto } from '../services/material-dto';
 import { versionContent } from '../services/recipe-dto';
 import { nextRunCode } from '../services/run-planning.service';
-import { versionMachines } from '../services/run-substitution';
 import { DEMO_PEOPLE } from './demo-people';
 
 const MINUTE = 60_000;

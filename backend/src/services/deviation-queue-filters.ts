@@ -1,4 +1,4 @@
-import { labDayRange, textSearchPlan, type DeviationQuery } from '@tracewright/shared';
+import { FULLTEXT_MIN_WORD, labDayRange, textSearchPlan, type DeviationQuery } from '@tracewright/shared';
 
 /** A WHERE clause over `deviations` with its named replacements. */
 export interface SqlFilter {
@@ -12,9 +12,9 @@ const escapeLike = (text: string) => text.replace(/[%_\\]/g, '\\$&');
  * The queue's filters as SQL over the deviations table alone (recipe and step kind are copied
  * there, migration 0013), so each combination can use one of the queue indexes. `withState`
  * false drops the state filter: the counts per state are taken over the other filters.
- * Dates are lab days in the lab's time zone.
+ * Dates are lab days in the lab's time zone. `minWord` is the server's innodb_ft_min_token_size.
  */
-export function queueFilter(query: DeviationQuery, timeZone: string, withState = true): SqlFilter {
+export function queueFilter(query: DeviationQuery, timeZone: string, withState = true, minWord = FULLTEXT_MIN_WORD): SqlFilter {
   const parts: string[] = [];
   const replacements: Record<string, unknown> = {};
   const add = (sql: string, values: Record<string, unknown> = {}) => {
@@ -31,17 +31,33 @@ export function queueFilter(query: DeviationQuery, timeZone: string, withState =
   const range = labDayRange(query.from, query.to, timeZone);
   if (range.start) add('created_at >= :start', { start: range.start });
   if (range.end) add('created_at < :end', { end: range.end });
-  if (query.q) addText(query.q, add);
+  if (query.q) addText(query.q, minWord, add);
   return { where: parts.length > 0 ? parts.join(' AND ') : '1 = 1', replacements };
 }
 
-/** Words the FULLTEXT index holds go through MATCH; short and common ones through LIKE (see migration 0013). */
-function addText(q: string, add: (sql: string, values?: Record<string, unknown>) => void) {
+/**
+ * InnoDB's built-in stopwords of under 3 letters (MariaDB's default list): the index skips them
+ * whatever the token size, so they stay with LIKE.
+ */
+const SHORT_STOPWORDS = new Set(['a', 'i', 'an', 'as', 'at', 'be', 'by', 'de', 'en', 'in', 'is', 'it', 'la', 'of', 'on', 'or', 'to']);
+
+/**
+ * Words the FULLTEXT index holds go through MATCH; the rest through LIKE (see migration 0013).
+ * The shared plan assumes the stock 3-letter minimum; where the server indexes shorter words
+ * (ours start with innodb_ft_min_token_size=2), those join the MATCH too: a lone "Ag" through
+ * LIKE '%ag%' reads every row, some 0.8 s at 100 000 deviations (`npm run bench`).
+ */
+function addText(q: string, minWord: number, add: (sql: string, values?: Record<string, unknown>) => void) {
   const plan = textSearchPlan(q);
-  if (plan.booleanQuery) add('MATCH (title, expected, actual) AGAINST (:fulltext IN BOOLEAN MODE)', { fulltext: plan.booleanQuery });
-  plan.likeWords.forEach((word, i) => {
-    add(`(title LIKE :like${i} OR expected LIKE :like${i} OR actual LIKE :like${i})`, { [`like${i}`]: `%${escapeLike(word)}%` });
-  });
+  const isIndexed = (w: string) => [...w].length >= minWord && !SHORT_STOPWORDS.has(w);
+  const shortIndexed = plan.likeWords.filter((w) => [...w].length < FULLTEXT_MIN_WORD && isIndexed(w));
+  const terms = [plan.booleanQuery, ...shortIndexed.map((w) => `+${w}*`)].filter((t) => t !== null).join(' ');
+  if (terms) add('MATCH (title, expected, actual) AGAINST (:fulltext IN BOOLEAN MODE)', { fulltext: terms });
+  plan.likeWords
+    .filter((w) => !shortIndexed.includes(w))
+    .forEach((word, i) => {
+      add(`(title LIKE :like${i} OR expected LIKE :like${i} OR actual LIKE :like${i})`, { [`like${i}`]: `%${escapeLike(word)}%` });
+    });
 }
 
 /** Newest first by default; ties broken by id so paging never shows a row twice. */

@@ -1,6 +1,6 @@
-import { Op, QueryTypes } from 'sequelize';
+import { Op, QueryTypes, type Sequelize } from 'sequelize';
 
-import { ageDays, DEVIATION_STATES, type DeviationQuery, type DeviationQueue, type DraftContent } from '@tracewright/shared';
+import { ageDays, DEVIATION_STATES, FULLTEXT_MIN_WORD, type DeviationQuery, type DeviationQueue, type DraftContent } from '@tracewright/shared';
 
 import type { AppContext } from '../app-context';
 import { DeviationModel } from '../models/deviation.model';
@@ -14,9 +14,30 @@ import { getLabSettings } from './settings.service';
 
 type QueueItem = DeviationQueue['items'][number];
 
+const minWords = new WeakMap<Sequelize, Promise<number>>();
+
+/**
+ * The shortest word the server's FULLTEXT index holds (innodb_ft_min_token_size), read once per
+ * pool: a server left at the stock 3 keeps 2-letter words on the LIKE path, so results stay right.
+ */
+function fulltextMinWord(sequelize: Sequelize): Promise<number> {
+  let found = minWords.get(sequelize);
+  if (!found) {
+    found = sequelize
+      .query<{ n: number | string }>('SELECT @@innodb_ft_min_token_size AS n', { type: QueryTypes.SELECT })
+      .then((rows) => Number(rows[0]?.n ?? FULLTEXT_MIN_WORD))
+      .catch((error: unknown) => {
+        minWords.delete(sequelize);
+        throw error;
+      });
+    minWords.set(sequelize, found);
+  }
+  return found;
+}
+
 /** Deviations per state under the other filters, every state listed (0 when none). */
-async function countsByState(ctx: AppContext, query: DeviationQuery, timeZone: string): Promise<Record<string, number>> {
-  const { where, replacements } = queueFilter(query, timeZone, false);
+async function countsByState(ctx: AppContext, query: DeviationQuery, timeZone: string, minWord: number): Promise<Record<string, number>> {
+  const { where, replacements } = queueFilter(query, timeZone, false, minWord);
   const rows = await ctx.sequelize.query<{ state: string; n: number | string }>(`SELECT state, COUNT(*) AS n FROM deviations WHERE ${where} GROUP BY state`, {
     replacements,
     type: QueryTypes.SELECT,
@@ -26,8 +47,8 @@ async function countsByState(ctx: AppContext, query: DeviationQuery, timeZone: s
   return counts;
 }
 
-async function pageIds(ctx: AppContext, query: DeviationQuery, timeZone: string): Promise<number[]> {
-  const { where, replacements } = queueFilter(query, timeZone);
+async function pageIds(ctx: AppContext, query: DeviationQuery, timeZone: string, minWord: number): Promise<number[]> {
+  const { where, replacements } = queueFilter(query, timeZone, true, minWord);
   const rows = await ctx.sequelize.query<{ id: number }>(`SELECT id FROM deviations WHERE ${where} ORDER BY ${QUEUE_ORDER[query.sort]} LIMIT :limit OFFSET :offset`, {
     replacements: { ...replacements, limit: query.pageSize, offset: (query.page - 1) * query.pageSize },
     type: QueryTypes.SELECT,
@@ -67,7 +88,8 @@ export async function queueItems(ctx: AppContext, rows: readonly DeviationModel[
  */
 export async function listDeviations(ctx: AppContext, query: DeviationQuery): Promise<DeviationQueue> {
   const { timeZone } = await getLabSettings();
-  const [counts, ids] = await Promise.all([countsByState(ctx, query, timeZone), pageIds(ctx, query, timeZone)]);
+  const minWord = query.q ? await fulltextMinWord(ctx.sequelize) : FULLTEXT_MIN_WORD;
+  const [counts, ids] = await Promise.all([countsByState(ctx, query, timeZone, minWord), pageIds(ctx, query, timeZone, minWord)]);
   const states: readonly string[] = query.state?.length ? [...new Set(query.state)] : DEVIATION_STATES;
   const total = states.reduce<number>((sum, s) => sum + (counts[s] ?? 0), 0);
   const rows = ids.length === 0 ? [] : await DeviationModel.findAll({ where: { id: { [Op.in]: ids } } });

@@ -1,6 +1,6 @@
 import { Op, type Transaction } from 'sequelize';
 
-import type { ProcessCheck } from '@tracewright/shared';
+import { approvalRefusal, versionMoveRefusal, type ProcessCheck, type VersionMove } from '@tracewright/shared';
 import type { RecipeVersionView, SendBackInput } from '@tracewright/shared';
 import type { ReleaseVersionInput } from '@tracewright/shared';
 
@@ -45,27 +45,26 @@ async function assertNotBlocked(row: RecipeVersionModel, doing: 'submitted' | 'r
   throw unprocessable(`Version ${row.number} cannot be ${doing}: ${count} (${titles}). Fix the recipe and try again.`, { checks, summary });
 }
 
-function assertState(row: RecipeVersionModel, expected: 'draft' | 'in-review', doing: string) {
-  if (row.state === expected) return;
-  const now = row.state === 'in-review' ? 'is already in review' : `is ${row.state}`;
-  throw conflict(`Version ${row.number} ${now}, so it cannot be ${doing}. Reload to see where it stands.`, { state: row.state });
+function assertState(row: RecipeVersionModel, move: VersionMove) {
+  const refusal = versionMoveRefusal(row.state, move, row.number);
+  if (refusal) throw conflict(refusal, { state: row.state });
 }
 
-/** An author may not approve their own version: nor may anyone who created, edited or submitted it. */
+/** Separation of duties: the approver must not have created, edited or submitted the version. */
 async function assertNotContributor(row: RecipeVersionModel, actor: UserModel) {
-  const who = `version ${row.number}`;
-  if (row.authorId === actor.id) throw forbidden(`You are the author of ${who}, and an author may not approve their own version. Ask another quality person to release it.`);
-  const wrote = await AuditEventModel.count({
-    where: { entityType: 'recipe-version', entityId: String(row.id), actorId: actor.id, action: { [Op.in]: ['recipe-version.created', 'recipe-version.saved', 'recipe-version.submitted'] } },
+  const wrote = await AuditEventModel.findAll({
+    attributes: ['actorId'],
+    where: { entityType: 'recipe-version', entityId: String(row.id), action: { [Op.in]: ['recipe-version.created', 'recipe-version.saved', 'recipe-version.submitted'] } },
   });
-  if (wrote > 0) throw forbidden(`You edited or submitted ${who}, so you may not approve it. Ask another quality person to release it.`);
+  const refusal = approvalRefusal({ authorId: row.authorId, contributorIds: wrote.map((a) => a.actorId).filter((id): id is number => id !== null) }, actor.id, row.number);
+  if (refusal) throw forbidden(refusal);
 }
 
 /** Draft → in review, when no check blocks it; every active quality person is told. */
 export async function submitVersion(ctx: AppContext, actor: UserModel, id: number): Promise<RecipeVersionView> {
   const { row, warnings } = await ctx.sequelize.transaction(async (transaction) => {
     const version = await loadVersion(id, transaction, true);
-    assertState(version, 'draft', 'submitted');
+    assertState(version, 'submit');
     const checks = await assertNotBlocked(version, 'submitted', transaction);
     await transition(ctx, actor, version, 'submitted', { state: 'in-review', submittedBy: actor.id, submittedAt: ctx.clock.now() }, transaction);
     return { row: version, warnings: checks.filter((c) => c.status === 'warning').length };
@@ -80,7 +79,7 @@ export async function submitVersion(ctx: AppContext, actor: UserModel, id: numbe
  */
 export async function releaseVersion(ctx: AppContext, actor: UserModel, id: number, input: ReleaseVersionInput, ip: string | null): Promise<RecipeVersionView> {
   const seen = await loadVersion(id);
-  assertState(seen, 'in-review', 'released');
+  assertState(seen, 'release');
   await assertNotContributor(seen, actor);
   const contentHash = input.contentHash ?? seen.contentHash;
   if (contentHash !== seen.contentHash) throw conflict(`Version ${seen.number} changed since you opened it; nothing was signed. Reload and review it again.`);
@@ -108,7 +107,7 @@ export async function releaseVersion(ctx: AppContext, actor: UserModel, id: numb
 export async function sendBackVersion(ctx: AppContext, actor: UserModel, id: number, input: SendBackInput): Promise<RecipeVersionView> {
   const { row, submitterId } = await ctx.sequelize.transaction(async (transaction) => {
     const version = await loadVersion(id, transaction, true);
-    assertState(version, 'in-review', 'sent back');
+    assertState(version, 'send-back');
     const submitter = version.submittedBy ?? null;
     const changes = { state: 'draft' as const, reviewComment: input.comment, submittedBy: null, submittedAt: null };
     await transition(ctx, actor, version, 'sent-back', changes, transaction, input.comment.slice(0, 1000));

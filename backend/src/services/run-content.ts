@@ -1,13 +1,13 @@
 import type { Transaction } from 'sequelize';
 
 import type { DraftContent, RecipeStep, RunState, StepRef } from '@tracewright/shared';
+import { substitutedContent, type Substitution, type VersionMachineKind } from '@tracewright/shared';
 
 import { conflict, notFound } from '../errors/app-error';
 import { RecipeVersionModel } from '../models/recipe-version.model';
 import { RunEquipmentModel } from '../models/run-equipment.model';
 import { RunModel } from '../models/run.model';
 import { versionContent } from './recipe-dto';
-import { substitutedContent, type Substitution, type VersionMachineKind } from './run-substitution';
 
 /** Reads a run; with `lock`, FOR UPDATE: every tablet write locks its run first, so writes to one run take turns. */
 export async function loadRun(id: number, transaction?: Transaction, lock = false): Promise<RunModel> {

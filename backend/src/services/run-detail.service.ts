@@ -1,4 +1,5 @@
 import type { RunDetail } from '@tracewright/shared';
+import { substitutedContent } from '@tracewright/shared';
 
 import type { AppContext } from '../app-context';
 import { notFound } from '../errors/app-error';
@@ -18,7 +19,6 @@ import { loadRun, substitutionsOf } from './run-content';
 import { equipmentViews, instrumentChoices, lotViews } from './run-detail-parts';
 import { toDeviationSummary, toReadingView, toStepRecordView, toTimerView } from './run-dto';
 import { safetyNotesByStep } from './run-step-context';
-import { substitutedContent } from './run-substitution';
 import { runSummary } from './run-summary';
 
 /** GET /api/runs/:id: everything the tablet needs to run, and to cache for working offline. */

@@ -1,6 +1,7 @@
 import { Op, type Transaction } from 'sequelize';
 
 import type { DraftContent, PlanRunInput } from '@tracewright/shared';
+import { versionMachines } from '@tracewright/shared';
 
 import { fieldProblem } from '../errors/app-error';
 import { HeatSourceModel } from '../models/heat-source.model';
@@ -8,7 +9,6 @@ import { InstrumentModel } from '../models/instrument.model';
 import { PrinterModel } from '../models/printer.model';
 import type { EquipmentKind } from '../models/run-equipment.model';
 import { SurfaceTreaterModel } from '../models/surface-treater.model';
-import { versionMachines } from './run-substitution';
 
 /** A machine the run uses: the version's own, one standing in for one of them, or an extra. */
 export interface RunMachine {

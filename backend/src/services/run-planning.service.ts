@@ -1,6 +1,7 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 
 import { checkSummary, deviationDraft, equipmentChoiceIssues, lotChoiceIssues, missingReasons, pieceCodes, recipeChecks, runCode } from '@tracewright/shared';
+import { substitutedContent, type VersionMachineKind } from '@tracewright/shared';
 import type { ChoiceIssue, DeviationDraft, DraftContent, PlanRunInput, RunDetail } from '@tracewright/shared';
 
 import type { AppContext } from '../app-context';
@@ -22,7 +23,6 @@ import { getRun } from './run-detail.service';
 import { runRecord } from './run-dto';
 import { resolveEquipment, type RunMachine } from './run-plan-equipment';
 import { resolveLots, type ChosenLot } from './run-plan-lots';
-import { substitutedContent, type VersionMachineKind } from './run-substitution';
 
 /** Another machine than the version's re-runs the version's checks with it in place; a block refuses the plan (422). */
 async function assertSubstitutesPass(content: DraftContent, machines: readonly RunMachine[], label: string, transaction: Transaction) {

@@ -46,25 +46,31 @@ export type TrendPoint = Trend['points'][number];
  */
 export async function trendPoints(recipeId: number, specId: string, options: { runIds?: readonly number[]; range?: { start: Date | null; end: Date | null } } = {}): Promise<TrendPoint[]> {
   const runWhere = options.runIds ? { recipeId, id: { [Op.in]: [...options.runIds] } } : { recipeId };
-  const runs = await RunModel.findAll({ where: runWhere, attributes: ['id', 'code'] });
+  const runs = await RunModel.findAll({ where: runWhere, attributes: ['id', 'code'], raw: true });
   if (runs.length === 0) return [];
   const at: Record<symbol, Date> = {};
   if (options.range?.start) at[Op.gte] = options.range.start;
   if (options.range?.end) at[Op.lt] = options.range.end;
+  // Plain rows with only the fields a point needs: model instances cost a getter per field read.
   const readings = await RunReadingModel.findAll({
     where: { specId, runId: { [Op.in]: runs.map((r) => r.id) }, supersededById: null, ...(Object.getOwnPropertySymbols(at).length > 0 ? { recordedAt: at } : {}) },
+    attributes: ['id', 'runId', 'pieceId', 'value', 'correctedValue', 'recordedAt', 'supersededById'],
+    raw: true,
   });
   const ids = readings.map((r) => r.id);
   const [notes, pieces] = await Promise.all([
     ids.length === 0 ? [] : TrendPointNoteModel.findAll({ where: { readingId: { [Op.in]: ids } } }),
-    RunPieceModel.findAll({ where: { id: { [Op.in]: readings.flatMap((r) => (r.pieceId === null ? [] : [r.pieceId])) } }, attributes: ['id', 'code'] }),
+    RunPieceModel.findAll({ where: { id: { [Op.in]: readings.flatMap((r) => (r.pieceId === null ? [] : [r.pieceId])) } }, attributes: ['id', 'code'], raw: true }),
   ]);
   const latest = latestPointNotes(notes);
+  // Lookups by id: a trend can hold thousands of points, and a scan per point grows with their square.
+  const runCodes = new Map(runs.map((run) => [run.id, run.code]));
+  const pieceCodes = new Map(pieces.map((p) => [p.id, p.code]));
   return selectTrendReadings(readings).map((r) => ({
     readingId: r.id,
     runId: r.runId,
-    runCode: runs.find((run) => run.id === r.runId)?.code ?? `#${r.runId}`,
-    pieceCode: pieces.find((p) => p.id === r.pieceId)?.code ?? null,
+    runCode: runCodes.get(r.runId) ?? `#${r.runId}`,
+    pieceCode: (r.pieceId === null ? null : pieceCodes.get(r.pieceId)) ?? null,
     value: judgedValue(r),
     recordedAt: r.recordedAt.toISOString(),
     excluded: latest.get(r.id)?.excluded ?? false,

@@ -1,11 +1,11 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { createBrowserRouter } from 'react-router';
 
-import { createRoutes } from './routes';
+import { createRoutes, deskRouterOptions } from './routes';
 import { redirectOnUnauthenticated } from './unauthenticated-redirect';
 
 export function createAppRouter(queryClient: QueryClient) {
-  const router = createBrowserRouter(createRoutes(queryClient));
+  const router = createBrowserRouter(createRoutes(queryClient), deskRouterOptions(queryClient));
   redirectOnUnauthenticated(queryClient, router);
   return router;
 }

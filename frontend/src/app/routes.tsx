@@ -1,52 +1,27 @@
 import type { QueryClient } from '@tanstack/react-query';
-import type { RouteObject } from 'react-router';
+import type { DOMRouterOpts, RouteObject } from 'react-router';
 
-import type { Role } from '@tracewright/shared';
-
-import { RouteErrorBoundary } from '../components/errors/route-error-boundary';
 import { LoadingState } from '../components/ui/loading-state';
-import { auditLoader } from '../features/audit/routes/audit-loader';
-import { AuditPage } from '../features/audit/routes/audit-page';
 import { ForgotPasswordPage } from '../features/auth/routes/forgot-password-page';
 import { setPasswordLoader } from '../features/auth/routes/set-password-loader';
 import { SetPasswordPage } from '../features/auth/routes/set-password-page';
 import { SignInPage } from '../features/auth/routes/sign-in-page';
-import { calculatorRoutes } from '../features/calculator/calculator-routes';
-import { catalogueRoutes } from '../features/catalogue/catalogue-routes';
-import { outgoingMailLoader } from '../features/dev-mail/routes/outgoing-mail-loader';
-import { OutgoingMailPage } from '../features/dev-mail/routes/outgoing-mail-page';
-import { HomePage } from '../features/home/routes/home-page';
-import { peopleLoader } from '../features/people/routes/people-loader';
-import { PeoplePage } from '../features/people/routes/people-page';
-import { MyPinPage } from '../features/pin/routes/my-pin-page';
 import { pinSwitchLoader } from '../features/pin/routes/pin-switch-loader';
 import { PinSwitchPage } from '../features/pin/routes/pin-switch-page';
-import { qualityRoutes } from '../features/quality/quality-routes';
-import { recipesRoutes } from '../features/recipes/recipes-routes';
 import { runViewRoutes } from '../features/run-view/run-view-routes';
-import { runsRoutes } from '../features/runs/runs-routes';
 import { settingsQueryOptions } from '../features/settings/api/get-settings';
-import { settingsLoader } from '../features/settings/routes/settings-loader';
-import { SettingsPage } from '../features/settings/routes/settings-page';
-import type { Guard } from '../lib/route-guard';
-import { requireRole, requireSession } from './guards';
+import { requireSession } from './guards';
 import { AppShell } from './layout/app-shell';
 import { PublicLayout } from './layout/public-layout';
-import { NotFoundPage } from './not-found-page';
-import { ROUTE_ROLES } from './route-roles';
+import { makeGuard, page } from './route-page';
 
-// Every route gets its own error element, so a failing page keeps the shell and navigation.
-const page = (route: RouteObject): RouteObject => ({ ErrorBoundary: RouteErrorBoundary, ...route });
+const DESK_ROUTE_ID = 'desk';
 
+/**
+ * The routes every first load needs: sign-in and PIN pages, the tablet run view, and the desk
+ * shell. The desk's own pages come in by `deskRouterOptions` on the first navigation to them.
+ */
 export function createRoutes(queryClient: QueryClient): RouteObject[] {
-  // The role check runs before the page's own loader, so a refused person never fetches its data.
-  const guarded: Guard =
-    (roles: readonly Role[], loader) =>
-    async (args) => {
-      await requireRole(queryClient, args.request, roles);
-      return loader(args);
-    };
-
   return [
     page({
       id: 'root',
@@ -62,8 +37,9 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
           ],
         }),
         // The tablet run view has its own full-screen layout; its loader checks the session itself.
-        ...runViewRoutes(queryClient, guarded).map(page),
+        ...runViewRoutes(queryClient, makeGuard(queryClient)).map(page),
         page({
+          id: DESK_ROUTE_ID,
           Component: AppShell,
           loader: async ({ request }) => {
             await requireSession(queryClient, request);
@@ -71,22 +47,22 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             void queryClient.prefetchQuery(settingsQueryOptions());
             return null;
           },
-          children: [
-            page({ index: true, Component: HomePage }),
-            page({ path: 'my-pin', Component: MyPinPage }),
-            page({ path: 'people', loader: guarded(ROUTE_ROLES.people, peopleLoader(queryClient)), Component: PeoplePage }),
-            page({ path: 'settings', loader: guarded(ROUTE_ROLES.settings, settingsLoader(queryClient)), Component: SettingsPage }),
-            page({ path: 'dev/mail', loader: guarded(ROUTE_ROLES.devMail, outgoingMailLoader(queryClient)), Component: OutgoingMailPage }),
-            page({ path: 'audit', loader: guarded(ROUTE_ROLES.audit, auditLoader(queryClient)), Component: AuditPage }),
-            ...recipesRoutes(queryClient, guarded).map(page),
-            ...runsRoutes(queryClient, guarded).map(page),
-            ...qualityRoutes(queryClient, guarded).map(page),
-            ...catalogueRoutes(queryClient, guarded).map(page),
-            ...calculatorRoutes(queryClient, guarded).map(page),
-            page({ path: '*', Component: NotFoundPage }),
-          ],
         }),
       ],
     }),
   ];
+}
+
+/**
+ * Adds the desk pages under the shell the first time a path needs them (React Router's lazy
+ * route discovery), once per router: the run view's first load on a slow tablet stays small.
+ */
+export function deskRouterOptions(queryClient: QueryClient): Pick<DOMRouterOpts, 'patchRoutesOnNavigation'> {
+  let added: Promise<void> | null = null;
+  return {
+    async patchRoutesOnNavigation({ patch }) {
+      added ??= import('./desk-routes').then(({ deskRoutes }) => patch(DESK_ROUTE_ID, deskRoutes(queryClient)));
+      await added;
+    },
+  };
 }

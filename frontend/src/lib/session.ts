@@ -3,6 +3,7 @@ import { queryOptions, useSuspenseQuery, type QueryClient } from '@tanstack/reac
 import { SessionSchema, type Session } from '@tracewright/shared';
 
 import { apiClient } from './api-client';
+import { cacheSessionForOffline } from './offline-session';
 
 // The session lives in lib because the shell, the guards and several features read it.
 export const sessionKeys = {
@@ -29,4 +30,5 @@ export function useSession(): Session {
 export function startSession(queryClient: QueryClient, session: Session): void {
   queryClient.clear();
   queryClient.setQueryData(sessionKeys.current(), session);
+  cacheSessionForOffline();
 }

@@ -60,9 +60,20 @@ export function calibrationStatus(dueOn: string | null, today: string, soonDays 
   return { state: 'ok', message: `Calibrated; next due ${dueOn}.` };
 }
 
+const dayFormats = new Map<string, Intl.DateTimeFormat>();
+/** One formatter per zone: building an Intl.DateTimeFormat costs far more than using one. */
+function dayFormat(timeZone: string): Intl.DateTimeFormat {
+  let format = dayFormats.get(timeZone);
+  if (!format) {
+    format = new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' });
+    dayFormats.set(timeZone, format);
+  }
+  return format;
+}
+
 /** Today's date in a time zone, as YYYY-MM-DD (the lab's calendar, not the server's). */
 export function isoDateInZone(now: Date, timeZone: string): string {
-  const parts = new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).formatToParts(now);
+  const parts = dayFormat(timeZone).formatToParts(now);
   const get = (type: string) => parts.find((p) => p.type === type)?.value ?? '';
   return `${get('year')}-${get('month')}-${get('day')}`;
 }

@@ -43,3 +43,4 @@ export {
   type VersionDiff,
 } from './version-diff';
 export { WETTING_PASS_MARGIN_MILLI_N_PER_M, wettingStatus } from './wetting-checks';
+export { approvalRefusal, VERSION_MOVES, versionMoveRefusal, type VersionContributors, type VersionMove } from './version-lifecycle';

@@ -36,3 +36,4 @@ export { timerElapsedSeconds, timerOutcome, timerRemainingSeconds, type RunTimer
 export { travellerSteps, type TravellerReading, type TravellerStep } from './traveller';
 export { treatmentWaitExceeded, type StepCompletion, type TreatmentWait } from './treatment-wait';
 export { materialsUsed, type MaterialsUsed } from './materials-used';
+export { substitutedContent, versionMachines, type MachineRef, type Substitution, type VersionMachineKind } from './machine-substitution';

@@ -3,6 +3,7 @@ import { useNavigate } from 'react-router';
 
 import { apiClient } from '../../../lib/api-client';
 import { isApiError } from '../../../lib/api-error';
+import { forgetOfflineSession } from '../../../lib/offline-session';
 
 export async function signOut(): Promise<void> {
   try {
@@ -22,6 +23,7 @@ export function useSignOut() {
       // Navigate first so no mounted page refetches (and 401s) against the cleared cache.
       await navigate('/sign-in', { replace: true });
       queryClient.clear();
+      await forgetOfflineSession();
     },
   });
 }

@@ -4,7 +4,6 @@ import type { z } from 'zod';
 import type { RunSignOffInputSchema } from '@tracewright/shared';
 
 import { apiClient } from '../../../lib/api-client';
-import { qualityKeys } from './quality-keys';
 
 export type SignOffVariables = { runId: number; input: z.input<typeof RunSignOffInputSchema> };
 
@@ -15,5 +14,6 @@ export async function signOffRun({ runId, input }: SignOffVariables): Promise<vo
 
 export function useSignOffRun() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: signOffRun, onSuccess: () => queryClient.invalidateQueries({ queryKey: qualityKeys.dashboard() }) });
+  // A sign-off closes the run: the dashboard, the run's record and lists, and the audit log all change.
+  return useMutation({ mutationFn: signOffRun, onSuccess: () => queryClient.invalidateQueries() });
 }

@@ -8,7 +8,7 @@ import { useSession } from '../../../lib/session';
 import { useCloseDeviation } from '../api/close-deviation';
 import { SIGN_MEANINGS } from '../utils/signature-meanings';
 import { DetailSection } from './detail-section';
-import { SignatureDialog } from './signature-dialog';
+import { SignatureDialog } from '../../../components/signatures/signature-dialog';
 import { TextAreaField } from './text-area-field';
 
 /** Closing is the last signature: the corrective action was checked and works. */

@@ -1,7 +1,7 @@
 import type { DeviationDetail } from '@tracewright/shared';
 
 import { DetailSection } from './detail-section';
-import { SignatureManifest } from './signature-manifest';
+import { SignatureManifest } from '../../../components/signatures/signature-manifest';
 
 /** How the deviation was closed: the verification written by the signer, and the signature. */
 export function ClosureRecord({ closure }: { closure: NonNullable<DeviationDetail['closure']> }) {

@@ -1,7 +1,7 @@
 import { DISPOSITION_LABELS, type DeviationDetail } from '@tracewright/shared';
 
 import { DetailSection } from './detail-section';
-import { SignatureManifest } from './signature-manifest';
+import { SignatureManifest } from '../../../components/signatures/signature-manifest';
 
 type DispositionRecordsProps = { deviation: DeviationDetail };
 

@@ -6,7 +6,7 @@ import { useSession } from '../../../lib/session';
 import { useDispositionDeviation } from '../api/disposition-deviation';
 import { dispositionBody, type DispositionFormOutput } from '../utils/disposition-form-schema';
 import { SIGN_MEANINGS } from '../utils/signature-meanings';
-import { SignatureDialog } from './signature-dialog';
+import { SignatureDialog } from '../../../components/signatures/signature-dialog';
 
 type DispositionSignDialogProps = {
   deviation: DeviationDetail;

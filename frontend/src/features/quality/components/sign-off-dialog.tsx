@@ -4,7 +4,7 @@ import { useToast } from '../../../components/ui/use-toast';
 import { useSession } from '../../../lib/session';
 import { useSignOffRun } from '../api/sign-off-run';
 import { SIGN_MEANINGS } from '../utils/signature-meanings';
-import { SignatureDialog } from './signature-dialog';
+import { SignatureDialog } from '../../../components/signatures/signature-dialog';
 
 type Run = QualityDashboard['runsAwaitingSignOff'][number];
 

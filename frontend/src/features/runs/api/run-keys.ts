@@ -12,6 +12,7 @@ export const runKeys = {
   lists: () => [...runKeys.all, 'list'] as const,
   list: (filters: RunListFilters) => [...runKeys.lists(), filters] as const,
   detail: (id: number) => [...runKeys.all, 'detail', id] as const,
+  signOff: (id: number) => [...runKeys.all, 'sign-off', id] as const,
   sources: () => [...runKeys.all, 'sources'] as const,
   source: (name: string) => [...runKeys.sources(), name] as const,
   version: (id: number) => [...runKeys.sources(), 'recipe-version', id] as const,

@@ -7,7 +7,7 @@ export function RecordFacts({ run }: { run: RunDetail }) {
     { term: 'Quantity', value: `${run.quantity} ${run.quantity === 1 ? 'piece' : 'pieces'}` },
     { term: 'Due', value: run.dueOn ?? 'Not set' },
     { term: 'Steps done', value: `${run.doneSteps} of ${run.totalSteps}` },
-    { term: 'Open deviations', value: String(run.openDeviations) },
+    { term: 'Deviations not closed', value: String(run.openDeviations) },
     { term: 'Planned', value: `${formatDateTime(run.createdAt)}${run.createdBy ? ` by ${run.createdBy.name}` : ''}` },
   ];
   return (

@@ -7,7 +7,7 @@ import type { RunDetail } from '@tracewright/shared';
 import { signedInAs } from '../../../../test/api-fixtures';
 import { server } from '../../../../test/msw-server';
 import { renderApp } from '../../../../test/render-app';
-import { runPagesApi } from '../testing/run-api';
+import { aSignOffView, runPagesApi, signOffApi } from '../testing/run-api';
 import { aReading, aRunDetail, MIKA } from '../testing/run-fixtures';
 
 const DONE_INSPECTION = {
@@ -58,6 +58,7 @@ describe('run record page', () => {
     server.use(
       ...signedInAs('quality'),
       http.get('/api/runs/42', () => HttpResponse.json(run)),
+      signOffApi(run),
       http.post('/api/runs/42/hold', async ({ request }) => {
         sent = await request.json();
         run = { ...run, state: 'on-hold', holdReason: 'Oven A reads 12 °C high; waiting for the service.' };
@@ -84,5 +85,46 @@ describe('run record page', () => {
     expect(screen.getByRole('link', { name: 'Readings (CSV)' })).toHaveAttribute('href', '/api/runs/42/readings.csv');
     expect(screen.queryByRole('region', { name: 'Change the run’s state' })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Put on hold' })).not.toBeInTheDocument();
+  });
+
+  it('when quality signs off a completed run with the password, then the hash read is sent and the record shows who signed, when, and what it means', async () => {
+    let run: RunDetail = aRunDetail({ state: 'completed' });
+    let view = aSignOffView(run);
+    let sent: unknown;
+    server.use(
+      ...signedInAs('quality'),
+      http.get('/api/runs/42', () => HttpResponse.json(run)),
+      http.get('/api/runs/42/sign-off', () => HttpResponse.json(view)),
+      http.post('/api/runs/42/sign-off', async ({ request }) => {
+        sent = await request.json();
+        run = { ...run, state: 'closed' };
+        view = { ...view, runState: 'closed', canSignOff: false, refusal: 'Run R-2026-0042 is already signed off.', signature: { signedBy: 'Ilse Moreau', meaning: 'run record approved', signedAt: '2026-12-02T14:05:00Z', contentHash: view.contentHash } };
+        return HttpResponse.json(view);
+      }),
+    );
+    const { user } = renderApp('/runs/42');
+
+    await user.click(await screen.findByRole('button', { name: 'Sign off run…' }));
+    const dialog = screen.getByRole('dialog', { name: 'Sign off run R-2026-0042' });
+    await user.type(within(dialog).getByLabelText('Your password'), 'a-good-password');
+    await user.click(within(dialog).getByRole('button', { name: 'Sign off run' }));
+
+    const section = await screen.findByRole('region', { name: 'Quality sign-off' });
+    expect(await within(section).findByText('Ilse Moreau')).toBeInTheDocument();
+    expect(within(section).getByText('run record approved')).toBeInTheDocument();
+    expect(within(section).getByText(/^2026-12-02 \d\d:05/)).toBeInTheDocument();
+    expect(sent).toEqual({ password: 'a-good-password', contentHash: 'c0ffee'.padEnd(64, '0') });
+  });
+
+  it('when a run still has a deviation without a disposition, then no sign-off is offered and the deviation is named with a link', async () => {
+    const run = aRunDetail({ state: 'completed' });
+    const view = aSignOffView(run, { canSignOff: false, refusal: 'Run R-2026-0042 cannot be signed off: 1 deviation has no disposition yet.', undecided: [{ id: 9, title: 'Smudge on key 2', state: 'open' }] });
+    server.use(...signedInAs('quality'), http.get('/api/runs/42', () => HttpResponse.json(run)), signOffApi(run, view), http.get('/api/heat-sources', () => HttpResponse.json({ heatSources: [] })));
+    renderApp('/runs/42');
+
+    const section = await screen.findByRole('region', { name: 'Quality sign-off' });
+    expect(within(section).getByText(/1 deviation has no disposition yet/)).toBeInTheDocument();
+    expect(within(section).getByRole('link', { name: '#9 Smudge on key 2' })).toHaveAttribute('href', '/deviations/9');
+    expect(within(section).queryByRole('button', { name: 'Sign off run…' })).not.toBeInTheDocument();
   });
 });

@@ -13,6 +13,7 @@ import { RecordLinks } from '../components/record-links';
 import { RecordStep } from '../components/record-step';
 import { RunMaterialsTables } from '../components/run-materials-tables';
 import { RunPageToolbar } from '../components/run-page-toolbar';
+import { RunSignOffSection } from '../components/run-sign-off-section';
 import { RunStateActions } from '../components/run-state-actions';
 import { RunStateBadge } from '../components/run-state-badge';
 import { runIdParam } from '../utils/run-id-param';
@@ -54,6 +55,7 @@ export function RunRecordPage() {
           </Notice>
         ) : null}
         <RecordFacts run={run} />
+        <RunSignOffSection run={run} />
         <RunStateActions run={run} />
         {run.notes ? <p className="whitespace-pre-line">Notes: {run.notes}</p> : null}
         <RunMaterialsTables run={run} />

@@ -1,16 +1,36 @@
 import { http, HttpResponse } from 'msw';
 
-import type { HeatSourceView, Ink, InstrumentView, LotView, Printer, RunDetail, Substrate, SurfaceTreaterView } from '@tracewright/shared';
+import type { HeatSourceView, Ink, InstrumentView, LotView, Printer, RunDetail, RunSignOffView, Substrate, SurfaceTreaterView } from '@tracewright/shared';
 import type { RecipeSummary, RecipeVersionView } from '@tracewright/shared';
 
 import { aHeatSource, aLot, anInk, anInstrument, aPrinter, aSubstrate } from './catalogue-records';
 import { aReleasedRecipe, aReleasedVersion } from './plan-records';
 import { aRunDetail } from './run-fixtures';
 
-/** What the run record, traveller and labels read: the run, and heat sources for the cautions. */
+/** A run's sign-off as the API reports it: not signed, and refused unless the run is completed. */
+export function aSignOffView(run: RunDetail, overrides: Partial<RunSignOffView> = {}): RunSignOffView {
+  const isCompleted = run.state === 'completed';
+  return {
+    runId: run.id,
+    runCode: run.code,
+    runState: run.state,
+    contentHash: 'c0ffee'.padEnd(64, '0'),
+    canSignOff: isCompleted,
+    refusal: isCompleted ? null : `Run ${run.code} is ${run.state}; only a completed run can be signed off.`,
+    undecided: [],
+    signature: null,
+    ...overrides,
+  };
+}
+
+/** The run's sign-off, read by the run record. */
+export const signOffApi = (run: RunDetail, view: RunSignOffView = aSignOffView(run)) => http.get(`/api/runs/${run.id}/sign-off`, () => HttpResponse.json(view));
+
+/** What the run record, traveller and labels read: the run, its sign-off, and heat sources for the cautions. */
 export function runPagesApi({ run = aRunDetail(), heatSources = [aHeatSource()] }: { run?: RunDetail; heatSources?: HeatSourceView[] } = {}) {
   return [
     http.get(`/api/runs/${run.id}`, () => HttpResponse.json(run)),
+    signOffApi(run),
     http.get('/api/heat-sources', () => HttpResponse.json({ heatSources })),
   ];
 }

@@ -1,11 +1,11 @@
-import { canTransition, type Role, type RunState } from '@tracewright/shared';
+import { canTransition, may, PERMISSIONS, type Role, type RunState } from '@tracewright/shared';
 
 export type RunAction = 'hold' | 'resume' | 'cancel';
 
 /** Who plans runs from the desk; the API checks again on every call. */
-export const RUN_PLANNERS: readonly Role[] = ['engineer', 'quality', 'admin'];
+export const RUN_PLANNERS: readonly Role[] = PERMISSIONS.planRuns;
 
-// The API admits the planners to all three (runs.routes.ts); an operator stops work by reporting a problem.
+// The API admits the planners to all three; an operator stops work by reporting a problem.
 const ACTIONS: Record<RunAction, { to: RunState; from?: RunState; roles: readonly Role[] }> = {
   hold: { to: 'on-hold', roles: RUN_PLANNERS },
   resume: { to: 'in-progress', from: 'on-hold', roles: RUN_PLANNERS },
@@ -25,3 +25,6 @@ export function availableRunActions(state: RunState, role: Role): RunAction[] {
     return (from === undefined || from === state) && canTransition(state, to) && roles.includes(role);
   });
 }
+
+/** Only quality staff sign a run's record off (the shared permission table; the API checks again). */
+export const canSignOffRuns = (role: Role): boolean => may(role, 'decideQuality');

@@ -1,6 +1,8 @@
-import type { DraftContent, RecipeStep } from '@tracewright/shared';
+import type { DraftContent } from '../../schemas/recipe.schema';
+import type { RecipeStep } from '../../schemas/recipe-step.schema';
+import type { EQUIPMENT_KINDS } from '../../schemas/run.schema';
 
-import type { EquipmentKind } from '../models/run-equipment.model';
+type EquipmentKind = (typeof EQUIPMENT_KINDS)[number];
 
 /** A machine kind a version names (instruments are picked per reading, never by the version). */
 export type VersionMachineKind = Exclude<EquipmentKind, 'instrument'>;
@@ -36,7 +38,7 @@ export function versionMachines(content: DraftContent): MachineRef[] {
 
 /**
  * The version's content as this run makes it: every substituted machine's id in place of the
- * version's, in the setup and in the steps. Plumbing, not a rule: the checks then judge it.
+ * version's, in the setup and in the steps. The checks then judge the substituted content.
  */
 export function substitutedContent(content: DraftContent, substitutions: readonly Substitution[]): DraftContent {
   if (substitutions.length === 0) return content;

@@ -4,12 +4,12 @@ import { useForm } from 'react-hook-form';
 
 import { ROLE_LABELS, SignatureInputSchema, type Session } from '@tracewright/shared';
 
-import { Button } from '../../../components/ui/button';
-import { FormError } from '../../../components/ui/form-error';
-import { TextField } from '../../../components/ui/text-field';
-import { type ApiError, isApiError } from '../../../lib/api-error';
-import { applyApiErrorToForm } from '../../../lib/form-errors';
-import { ModalDialog } from '../../../components/ui/modal-dialog';
+import { type ApiError, isApiError } from '../../lib/api-error';
+import { applyApiErrorToForm } from '../../lib/form-errors';
+import { Button } from '../ui/button';
+import { FormError } from '../ui/form-error';
+import { ModalDialog } from '../ui/modal-dialog';
+import { TextField } from '../ui/text-field';
 
 const PasswordSchema = SignatureInputSchema.pick({ password: true });
 

@@ -2,7 +2,7 @@ import type { z } from 'zod';
 
 import type { SignatureViewSchema } from '@tracewright/shared';
 
-import { formatDateTime } from '../../../lib/format-date';
+import { formatDateTime } from '../../lib/format-date';
 
 type SignatureManifestProps = { signature: z.infer<typeof SignatureViewSchema> };
 
