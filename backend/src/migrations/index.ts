@@ -15,6 +15,7 @@ import * as createDeviationEvents from './20261202-0014-create-deviation-events'
 import * as createDeviationDispositions from './20261202-0015-create-deviation-dispositions';
 import * as createRunSignOffs from './20261202-0016-create-run-sign-offs';
 import * as createTrendNotes from './20261202-0017-create-trend-notes';
+import * as rebuildDeviationTextIndex from './20261202-0018-rebuild-deviation-text-index';
 
 /**
  * Every migration, in order. Listed statically (not globbed) so they load the same way under
@@ -38,4 +39,5 @@ export const MIGRATIONS = [
   { name: '20261202-0015-create-deviation-dispositions', ...createDeviationDispositions },
   { name: '20261202-0016-create-run-sign-offs', ...createRunSignOffs },
   { name: '20261202-0017-create-trend-notes', ...createTrendNotes },
+  { name: '20261202-0018-rebuild-deviation-text-index', ...rebuildDeviationTextIndex },
 ];

@@ -73,6 +73,16 @@ describe('deviation queue', () => {
     expect((await queue(quality, { q: `${words.critical.slice(0, 7)} to` })).items.map((i) => i.id)).toEqual([ids.critical]);
   });
 
+  it('when searching a 2-letter word that is not a stopword (a metal symbol such as Ag), then it must match like any other word', async () => {
+    const run = await freshRun(engineer, 2);
+    const tag = word();
+    const silver = await reportProblem(operator, run.id, { description: `Ag trace ${tag} cracked at the bend.` });
+    await reportProblem(operator, run.id, { description: `Carbon trace ${tag} cracked at the bend.` });
+    expect((await queue(quality, { q: `${tag} Ag` })).items.map((i) => i.id)).toEqual([silver]);
+    expect((await queue(quality, { q: `${tag} ag` })).items.map((i) => i.id)).toEqual([silver]);
+    expect((await queue(quality, { q: `${tag} Cu` })).total).toBe(0);
+  });
+
   it('when filtered by state, then the total follows the state and the counts by state ignore it', async () => {
     const { run, ids } = await seededRun();
     expect((await post(quality, `/api/deviations/${ids.major}/assign`, { assigneeId: quality.user.id })).status).toBe(200);

@@ -16,6 +16,8 @@ import { PublicLayout } from './layout/public-layout';
 import { makeGuard, page } from './route-page';
 
 const DESK_ROUTE_ID = 'desk';
+/** Paths served by the run view's own routes (run-view-routes.tsx), never by the desk. */
+const TABLET_PATH = /^\/run(\/|$)/;
 
 /**
  * The routes every first load needs: sign-in and PIN pages, the tablet run view, and the desk
@@ -60,7 +62,10 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
 export function deskRouterOptions(queryClient: QueryClient): Pick<DOMRouterOpts, 'patchRoutesOnNavigation'> {
   let added: Promise<void> | null = null;
   return {
-    async patchRoutesOnNavigation({ patch }) {
+    async patchRoutesOnNavigation({ path, patch }) {
+      // React Router also asks on paths it matched by a parameter (/run/12), in case a more
+      // specific route exists: the run view's routes are all known, so the tablet skips the desk.
+      if (TABLET_PATH.test(path)) return;
       added ??= import('./desk-routes').then(({ deskRoutes }) => patch(DESK_ROUTE_ID, deskRoutes(queryClient)));
       await added;
     },
