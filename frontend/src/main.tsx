@@ -6,11 +6,13 @@ import { createRoot } from 'react-dom/client';
 import { RouterProvider } from 'react-router/dom';
 
 import { AppProvider } from './app/provider';
+import { prefetchRunOfPage } from './features/run-view/run-view-routes';
 import { createAppRouter } from './app/router';
 import { cacheSessionForOffline } from './lib/offline-session';
 import { createQueryClient } from './lib/query-client';
 
 const queryClient = createQueryClient();
+prefetchRunOfPage(queryClient, window.location.pathname);
 const router = createAppRouter(queryClient);
 
 const container = document.getElementById('root');

@@ -4,6 +4,7 @@ import type { RouteObject } from 'react-router';
 import { ROLES } from '@tracewright/shared';
 
 import type { Guard } from '../../lib/route-guard';
+import { runSnapshotQueryOptions } from './api/get-run-detail';
 
 /**
  * The tablet run view at /run/:runId and the traveller scanner at /run/scan, outside the desk
@@ -24,4 +25,16 @@ export function runViewRoutes(queryClient: QueryClient, guarded: Guard): RouteOb
       lazy: async () => ({ Component: (await import('./routes/run-page')).RunPage }),
     },
   ];
+}
+
+const RUN_PATH = /^\/run\/([1-9][0-9]*)\/?$/;
+
+/**
+ * Asks for the run as soon as the app starts when the page is a run view (a scanned traveller), so
+ * the run travels while the session is checked and the page's code loads: on a slow tablet the
+ * run would otherwise wait for both. The route's loader then finds it in the cache.
+ */
+export function prefetchRunOfPage(queryClient: QueryClient, pathname: string): void {
+  const match = RUN_PATH.exec(pathname);
+  if (match) void queryClient.prefetchQuery(runSnapshotQueryOptions(Number(match[1])));
 }
