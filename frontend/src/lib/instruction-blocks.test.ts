@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 
-import { parseMarkdownLite } from './markdown-lite';
+import { parseMarkdownLite } from './instruction-blocks';
 
 describe('parseMarkdownLite', () => {
   it.each([
