@@ -1,5 +1,7 @@
 import { RunDetailSchema, type RunDetail } from '@tracewright/shared';
 
+import { recordOf } from '../utils/bench-run';
+
 /** Invented demo data: a lens-wrap heater run with a cure and an inspection (values for tests only). */
 export const RUN_ID = 7;
 export const CURE_STEP_ID = 'cure-step-1';
@@ -65,22 +67,7 @@ type StepRecord = RunDetail['steps'][number];
 
 /** A step's record in a given state, as the server would hold it. */
 export function aStepRecord(stepId: string, overrides: Partial<StepRecord> = {}): StepRecord {
-  return {
-    stepId,
-    state: 'pending',
-    safetyAcknowledgedAt: null,
-    safetyAcknowledgedBy: null,
-    startedAt: null,
-    startedBy: null,
-    completedAt: null,
-    completedBy: null,
-    notDoneReason: null,
-    note: '',
-    confirmedLotIds: [],
-    nozzleCheck: null,
-    hasDeviceTime: false,
-    ...overrides,
-  };
+  return { ...recordOf({ steps: [] }, stepId), ...overrides };
 }
 
 const ROBIN = { id: 1, name: 'Robin Vale' };
