@@ -2,6 +2,7 @@ import * as mariadb from 'mariadb';
 import { Sequelize } from 'sequelize';
 
 import type { Env } from '../config/env';
+import { coalescingSocket } from './coalescing-socket';
 
 /**
  * One Sequelize per role: `app` (data rights only) serves requests, `owner` runs migrations.
@@ -20,7 +21,8 @@ export function createSequelize(env: Env, as: 'app' | 'owner' = 'app'): Sequeliz
     // Short waits so a request meets a dead or restarting database with a quick 503 (never a hang):
     // a connection normally takes milliseconds, and a wait for a free one is short unless overloaded.
     pool: { max: as === 'owner' ? 2 : env.DB_POOL_MAX, min: 0, acquire: 5_000, idle: 10_000 },
-    dialectOptions: { connectTimeout: 3_000 },
+    // Queries issued together leave together (see coalescing-socket).
+    dialectOptions: { connectTimeout: 3_000, stream: () => coalescingSocket(env.DB_PORT, env.DB_HOST) },
     define: { underscored: true },
   });
 }

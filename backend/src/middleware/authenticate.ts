@@ -3,6 +3,7 @@ import type { NextFunction, Request, Response } from 'express';
 import type { Role } from '@tracewright/shared';
 
 import type { AppContext } from '../app-context';
+import { findRow, withConnection } from '../db/direct-rows';
 import { AppError, forbidden, unauthenticated } from '../errors/app-error';
 import { verifySession } from '../lib/session-token';
 import { UserModel } from '../models/user.model';
@@ -28,7 +29,9 @@ export function authenticate(ctx: AppContext, roles: 'signed-in' | readonly Role
     const token: unknown = req.cookies?.[SESSION_COOKIE];
     const claims = typeof token === 'string' ? verifySession(ctx.env.JWT_SECRET, token) : null;
     if (!claims) throw unauthenticated('Sign in to continue.');
-    const user = await UserModel.findByPk(Number(claims.sub));
+    const id = Number(claims.sub);
+    // On every request: a direct read (db/direct-rows).
+    const user = Number.isSafeInteger(id) ? await withConnection(ctx.sequelize, (c) => findRow(UserModel, c, { id })) : null;
     if (!user || user.tokenVersion !== claims.tv) throw unauthenticated('Your session has ended. Sign in again.');
     if (user.status !== 'active') throw unauthenticated('This account has been deactivated. Ask an admin.');
     if (!SAFE_METHODS.has(req.method) && req.get('x-csrf-token') !== claims.csrf) {

@@ -1,6 +1,7 @@
 import type { AppContext } from '../app-context';
 import { hashSecret } from '../lib/secret-hashing';
 import { LabSettingsModel } from '../models/lab-settings.model';
+import { forgetLabSettings } from '../services/settings.service';
 import { UserModel } from '../models/user.model';
 import { recordAudit } from '../services/audit.service';
 import { DEMO_PASSWORD, DEMO_PEOPLE, DEMO_SETTINGS } from './demo-people';
@@ -27,6 +28,7 @@ export async function seedDemoLab(ctx: AppContext): Promise<{ seeded: boolean }>
       await recordAudit(ctx, { actorId: null, action: 'seed.user', entityType: 'user', entityId: user.id, after: { email: user.email, role: user.role } }, transaction);
     }
     await LabSettingsModel.upsert({ id: 1, ...DEMO_SETTINGS, updatedAt: ctx.clock.now() }, { transaction });
+    forgetLabSettings(transaction);
     await seedDemoMaterials(ctx, transaction);
     await seedDemoRecipes(ctx, transaction);
     await seedDemoRuns(ctx, transaction);

@@ -3,6 +3,7 @@ import type { Transaction } from 'sequelize';
 import type { AuditEvent, AuditSearchQuery } from '@tracewright/shared';
 
 import type { AppContext } from '../app-context';
+import { connectionOf, insertRow, sequelizeOf, withConnection } from '../db/direct-rows';
 import { AuditEventModel } from '../models/audit-event.model';
 import { UserModel } from '../models/user.model';
 import { auditFilter } from './audit-filters';
@@ -21,20 +22,19 @@ export interface AuditEntry {
 
 /** Writes one audit row; pass the transaction of the change so both land or neither does. */
 export async function recordAudit(ctx: Pick<AppContext, 'clock'>, entry: AuditEntry, transaction?: Transaction) {
-  await AuditEventModel.create(
-    {
-      at: ctx.clock.now(),
-      actorId: entry.actorId,
-      action: entry.action,
-      entityType: entry.entityType,
-      entityId: entry.entityId === undefined || entry.entityId === null ? null : String(entry.entityId),
-      beforeJson: entry.before ?? null,
-      afterJson: entry.after ?? null,
-      reason: entry.reason ?? null,
-      ip: entry.ip ?? null,
-    },
-    { transaction },
-  );
+  const row = {
+    at: ctx.clock.now(),
+    actorId: entry.actorId,
+    action: entry.action,
+    entityType: entry.entityType,
+    entityId: entry.entityId === undefined || entry.entityId === null ? null : String(entry.entityId),
+    beforeJson: entry.before ?? null,
+    afterJson: entry.after ?? null,
+    reason: entry.reason ?? null,
+    ip: entry.ip ?? null,
+  };
+  // Every write is audited, so this is on every write's path: a direct INSERT (db/direct-rows).
+  await (transaction ? insertRow(AuditEventModel, connectionOf(transaction), row) : withConnection(sequelizeOf(AuditEventModel), (c) => insertRow(AuditEventModel, c, row)));
 }
 
 /** An audit row as the API shows it, the actor's name resolved. */

@@ -1,6 +1,8 @@
-import { UniqueConstraintError, type Transaction } from 'sequelize';
+import type { Transaction } from 'sequelize';
 
 import type { AppContext } from '../app-context';
+import { connectionOf, insertRow } from '../db/direct-rows';
+import { pipelinedTransaction } from '../db/pipelined-transaction';
 import { unprocessable } from '../errors/app-error';
 import { IdempotencyKeyModel } from '../models/idempotency-key.model';
 import type { UserModel } from '../models/user.model';
@@ -47,40 +49,46 @@ export async function storedAnswer<T>(claim: IdempotencyClaim): Promise<WriteRes
   return { status: row.statusCode, body: parseJsonColumn<T>(row.responseBody, null as T), isReplay: true };
 }
 
+/** Sends a write now and waits for it only at the end, with the key's answer, before the commit. */
+export type DeferWrite = (write: Promise<unknown>) => void;
+
 /**
  * Runs a write and stores its answer under its key in one transaction, so a crash can leave
  * neither a change without its key (a retry would do it twice) nor a key without its change.
- * A known key replays its stored answer without calling `work`. The key row is claimed first:
- * a twin request with the same key (the outbox retrying while the first is still running)
- * waits on that row, fails on the unique key once the first commits, and replays its answer.
- * A refused write (an error) rolls back with its key, so a corrected retry may use it again.
+ * The key row is claimed first, in the same round trip as the write's first reads: a twin sent
+ * while the first is still running waits on it, fails on its unique index once the first commits,
+ * and replays the first's answer. A retry of a write that committed long ago fails the same way.
+ * A refused write rolls back with its key, so a corrected retry may use it again. The answer is
+ * stored with the write's deferred changes, in one round trip, and then the transaction commits.
  */
 export async function idempotentTransaction<T>(
   ctx: AppContext,
   claim: IdempotencyClaim | null,
   status: number,
-  work: (transaction: Transaction) => Promise<T>,
+  work: (transaction: Transaction, defer: DeferWrite) => Promise<T>,
 ): Promise<WriteResult<T>> {
-  const earlier = claim ? await storedAnswer<T>(claim) : null;
-  if (earlier) return earlier;
   try {
-    return await ctx.sequelize.transaction(async (transaction) => {
+    return await pipelinedTransaction(ctx.sequelize, async (transaction) => {
+      const connection = connectionOf(transaction);
+      const pending: Array<Promise<unknown>> = [];
+      const keep = (write: Promise<unknown>) => {
+        // Awaited below; until then an early failure must not count as unhandled.
+        write.catch(() => undefined);
+        pending.push(write);
+      };
       const keyRow = claim
-        ? await IdempotencyKeyModel.create(
-            { userId: claim.userId, idempotencyKey: claim.key, method: claim.method, path: claim.path, requestHash: claim.requestHash, statusCode: null, responseBody: null, createdAt: ctx.clock.now() },
-            { transaction },
-          )
+        ? insertRow(IdempotencyKeyModel, connection, { userId: claim.userId, idempotencyKey: claim.key, method: claim.method, path: claim.path, requestHash: claim.requestHash, statusCode: null, responseBody: null, createdAt: ctx.clock.now() })
         : null;
+      keyRow?.catch(() => undefined);
       // A JSON round trip, so the first answer is byte for byte what a replay will send.
-      const body = JSON.parse(JSON.stringify(await work(transaction))) as T;
-      await keyRow?.update({ statusCode: status, responseBody: body }, { transaction });
+      const body = JSON.parse(JSON.stringify(await work(transaction, keep))) as T;
+      if (keyRow) keep(connection.query('UPDATE idempotency_keys SET status_code = ?, response_body = ? WHERE id = ?', [status, JSON.stringify(body), await keyRow]));
+      await Promise.all(pending);
       return { status, body, isReplay: false };
     });
   } catch (err) {
-    if (claim && err instanceof UniqueConstraintError) {
-      const twin = await storedAnswer<T>(claim);
-      if (twin) return twin;
-    }
+    const earlier = claim ? await storedAnswer<T>(claim) : null;
+    if (earlier) return earlier;
     throw err;
   }
 }

@@ -1,6 +1,7 @@
 import { createHash } from 'node:crypto';
 
-import { Op, type Transaction } from 'sequelize';
+import type { Connection } from 'mariadb';
+import type { Transaction } from 'sequelize';
 
 import { canonicalJson, DraftContentSchema, type DraftContent } from '@tracewright/shared';
 import type { PersonRef, RecipeSummary, VersionRef, VersionSummary } from '@tracewright/shared';
@@ -9,6 +10,7 @@ import type { Signature } from '@tracewright/shared';
 import type { RecipeVersionModel } from '../models/recipe-version.model';
 import type { RecipeModel } from '../models/recipe.model';
 import type { SignatureModel } from '../models/signature.model';
+import { connectionOf, sequelizeOf, withConnection } from '../db/direct-rows';
 import { UserModel } from '../models/user.model';
 import { parseJsonColumn } from './catalogue-dto';
 
@@ -52,8 +54,10 @@ export const versionRef = (row: Pick<RecipeVersionModel, 'id' | 'number' | 'stat
 export async function peopleNames(ids: Array<number | null | undefined>, transaction?: Transaction): Promise<Map<number, string>> {
   const wanted = [...new Set(ids.filter((id): id is number => typeof id === 'number'))];
   if (wanted.length === 0) return new Map();
-  const users = await UserModel.findAll({ where: { id: { [Op.in]: wanted } }, attributes: ['id', 'name'], transaction });
-  return new Map(users.map((u) => [u.id, u.name]));
+  const read = async (c: Connection) => (await c.query(`SELECT id, name FROM users WHERE id IN (${wanted.map(() => '?').join(', ')})`, wanted)) as Array<{ id: number; name: string }>;
+  // On every tablet write's answer: a direct read (db/direct-rows).
+  const users = transaction ? await read(connectionOf(transaction)) : await withConnection(sequelizeOf(UserModel), read);
+  return new Map(users.map((u) => [Number(u.id), u.name]));
 }
 
 export const personRef = (people: Map<number, string>, id: number | null | undefined): PersonRef | null =>

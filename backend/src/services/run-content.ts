@@ -1,17 +1,21 @@
+import type { Connection } from 'mariadb';
 import type { Transaction } from 'sequelize';
 
 import type { DraftContent, RecipeStep, RunState, StepRef } from '@tracewright/shared';
 import { substitutedContent, type Substitution, type VersionMachineKind } from '@tracewright/shared';
 
+import { connectionOf, findRow, findRows, sequelizeOf, withConnection } from '../db/direct-rows';
+import { begun } from '../db/pipelined-transaction';
 import { conflict, notFound } from '../errors/app-error';
-import { RecipeVersionModel } from '../models/recipe-version.model';
 import { RunEquipmentModel } from '../models/run-equipment.model';
 import { RunModel } from '../models/run.model';
-import { versionContent } from './recipe-dto';
+import { cachedVersionContent } from './version-content-cache';
 
 /** Reads a run; with `lock`, FOR UPDATE: every tablet write locks its run first, so writes to one run take turns. */
 export async function loadRun(id: number, transaction?: Transaction, lock = false): Promise<RunModel> {
-  const row = await RunModel.findByPk(id, { transaction, lock: lock && transaction ? transaction.LOCK.UPDATE : undefined });
+  const row = transaction
+    ? await findRow(RunModel, connectionOf(transaction), { id }, { lock })
+    : await withConnection(sequelizeOf(RunModel), (c) => findRow(RunModel, c, { id }));
   if (!row) throw notFound('Run', id);
   return row;
 }
@@ -25,12 +29,29 @@ export function substitutionsOf(rows: readonly RunEquipmentModel[]): Substitutio
 
 /** The version's content with the run's machines in place: what the operator actually follows. */
 export async function runContent(run: RunModel, transaction?: Transaction): Promise<DraftContent> {
-  const [version, equipment] = await Promise.all([
-    RecipeVersionModel.findByPk(run.versionId, { transaction }),
-    RunEquipmentModel.findAll({ where: { runId: run.id }, transaction }),
+  const read = async (connection: Connection) => {
+    const [content, equipment] = await Promise.all([cachedVersionContent(connection, run.versionId), findRows(RunEquipmentModel, connection, { runId: run.id })]);
+    if (!content) throw notFound('Recipe version', run.versionId);
+    return substitutedContent(content, substitutionsOf(equipment));
+  };
+  return transaction ? read(connectionOf(transaction)) : withConnection(sequelizeOf(RunModel), read);
+}
+
+/**
+ * The run locked FOR UPDATE, with its content, in one round trip: the lock goes first on the
+ * connection, so the reads after it see every write committed before it was granted.
+ */
+export async function lockRunWithContent(transaction: Transaction, runId: number): Promise<{ run: RunModel; content: DraftContent }> {
+  const connection = connectionOf(transaction);
+  const [, run, content, equipment] = await Promise.all([
+    begun(transaction),
+    findRow(RunModel, connection, { id: runId }, { lock: true }),
+    cachedVersionContent(connection, { runId }),
+    findRows(RunEquipmentModel, connection, { runId }),
   ]);
-  if (!version) throw notFound('Recipe version', run.versionId);
-  return substitutedContent(versionContent(version), substitutionsOf(equipment));
+  if (!run) throw notFound('Run', runId);
+  if (!content) throw notFound('Recipe version', run.versionId);
+  return { run, content: substitutedContent(content, substitutionsOf(equipment)) };
 }
 
 export interface StepAt {

@@ -30,8 +30,8 @@ export const runRecord = (row: RunModel) => ({
 export function toStepRecordView(
   row: RunStepRecordModel,
   people: People,
-  confirmations: readonly RunLotConfirmationModel[],
-  nozzleChecks: readonly RunNozzleCheckModel[],
+  confirmations: ReadonlyArray<Pick<RunLotConfirmationModel, 'stepId' | 'lotId'>>,
+  nozzleChecks: ReadonlyArray<Pick<RunNozzleCheckModel, 'id' | 'stepId' | 'passed' | 'photoFileId' | 'checkedAt'>>,
 ): StepRecordView {
   const latestCheck = nozzleChecks.filter((c) => c.stepId === row.stepId).sort((a, b) => b.id - a.id)[0];
   return {

@@ -5,6 +5,7 @@ import type { CompleteStepInputSchema, DeviceStampSchema, StepNotDoneInputSchema
 import type { StepWriteResult } from '@tracewright/shared';
 
 import type { AppContext } from '../app-context';
+import { findRow, findRows, updateRow } from '../db/direct-rows';
 import { conflict } from '../errors/app-error';
 import { RunStepRecordModel } from '../models/run-step-record.model';
 import { RunTimerModel } from '../models/run-timer.model';
@@ -15,7 +16,7 @@ import { loadReferences } from './recipe-references';
 import { stampedTime } from './run-clock';
 import { stepAt, type StepAt } from './run-content';
 import { safetyNotesByStep } from './run-step-context';
-import { auditRun, lockStepRecord, moveRun, runWrite, stepResult, type RunScope } from './run-write';
+import { auditRun, lockStepRecord, moveRun, readStep, runWrite, stepAnswer, stepResult, type RunScope } from './run-write';
 
 type DeviceStamp = z.infer<typeof DeviceStampSchema>;
 
@@ -32,22 +33,23 @@ async function settledConflict(scope: RunScope, at: StepAt, record: RunStepRecor
   return conflict(`${name(at)} ${what} by ${person} at ${when?.toISOString()}, so it cannot be ${doing}. Reload to see where the run stands.`, details);
 }
 
+const runningTimerConflict = (at: StepAt, running: Pick<RunTimerModel, 'id' | 'label'>, doing: string) =>
+  conflict(`The timer “${running.label}” of ${name(at)} is still running. Stop it first (its time is judged against the step's window), then ${doing}.`, { timerId: running.id });
+
 async function assertNoRunningTimer(scope: RunScope, at: StepAt, doing: string) {
-  const running = await RunTimerModel.findOne({ where: { runId: scope.run.id, stepId: at.step.id, stoppedAt: null }, transaction: scope.transaction });
-  if (running) {
-    throw conflict(`The timer “${running.label}” of ${name(at)} is still running. Stop it first (its time is judged against the step's window), then ${doing}.`, { timerId: running.id });
-  }
+  const running = await findRow(RunTimerModel, scope.connection, { runId: scope.run.id, stepId: at.step.id, stoppedAt: null });
+  if (running) throw runningTimerConflict(at, running, doing);
 }
 
 /** The run completes once every step is done or not done. */
 async function settleRun(scope: RunScope): Promise<void> {
-  const records = await RunStepRecordModel.findAll({ where: { runId: scope.run.id }, attributes: ['stepId', 'state'], transaction: scope.transaction });
+  const records = await findRows(RunStepRecordModel, scope.connection, { runId: scope.run.id });
   if (runProgress(scope.content.steps, records).isComplete) await moveRun(scope, 'completed', 'completed');
 }
 
 /** Printing too long after a surface treatment raises a deviation per treatment that faded. */
 async function treatmentWaitDeviations(scope: RunScope, at: StepAt, startedAt: Date): Promise<DeviationSummary[]> {
-  const records = await RunStepRecordModel.findAll({ where: { runId: scope.run.id, state: 'done' }, attributes: ['stepId', 'completedAt'], transaction: scope.transaction });
+  const records = await findRows(RunStepRecordModel, scope.connection, { runId: scope.run.id, state: 'done' });
   const late = treatmentWaitExceeded(scope.content.steps, records, startedAt, scope.ctx.clock.now()).filter((w) => w.isExceeded && w.printStepId === at.step.id);
   const raised: DeviationSummary[] = [];
   for (const wait of late) {
@@ -66,7 +68,7 @@ export function acknowledgeSafety(ctx: AppContext, write: TabletWrite, runId: nu
     if (record.state === 'done' || record.state === 'not-done') throw await settledConflict(scope, at, record, 'acknowledged now');
     if (record.safetyAcknowledgedAt === null) {
       const time = stampedTime(ctx, input);
-      await record.update({ safetyAcknowledgedBy: scope.actor.id, safetyAcknowledgedAt: time.at, hasDeviceTime: record.hasDeviceTime || time.isDeviceClock }, { transaction: scope.transaction });
+      await updateRow(record, scope.connection, { safetyAcknowledgedBy: scope.actor.id, safetyAcknowledgedAt: time.at, hasDeviceTime: record.hasDeviceTime || time.isDeviceClock });
       await auditRun(scope, { action: 'run-step.safety-acknowledged', entityType: 'run', entityId: scope.run.id, after: { stepId, at: time.at, deviceTime: time.deviceTime } });
     }
     return stepResult(scope, stepId, []);
@@ -88,7 +90,7 @@ export function startStep(ctx: AppContext, write: TabletWrite, runId: number, st
     if (record.state !== 'pending') throw await settledConflict(scope, at, record, 'started');
     await assertSafetyAcknowledged(scope, at, record);
     const time = stampedTime(ctx, input);
-    await record.update({ state: 'in-progress', startedBy: scope.actor.id, startedAt: time.at, hasDeviceTime: record.hasDeviceTime || time.isDeviceClock }, { transaction: scope.transaction });
+    await updateRow(record, scope.connection, { state: 'in-progress', startedBy: scope.actor.id, startedAt: time.at, hasDeviceTime: record.hasDeviceTime || time.isDeviceClock });
     await auditRun(scope, { action: 'run-step.started', entityType: 'run', entityId: scope.run.id, after: { stepId, at: time.at, deviceTime: time.deviceTime } });
     const deviations = isPrintPass(at.step) ? await treatmentWaitDeviations(scope, at, time.at) : [];
     if (scope.run.state === 'planned') await moveRun(scope, 'in-progress', 'started');
@@ -100,17 +102,27 @@ const isPrintPass = (step: RecipeStep) => step.kind === 'print-pass';
 
 /** In progress → done, once: a second tablet completing the same step gets 409 naming who and when. */
 export function completeStep(ctx: AppContext, write: TabletWrite, runId: number, stepId: string, input: z.infer<typeof CompleteStepInputSchema>): Promise<WriteResult<StepWriteResult>> {
-  return runWrite(ctx, write, runId, 200, async (scope) => {
-    const at = stepAt(scope.content, scope.run, stepId);
-    const record = await lockStepRecord(scope, stepId);
-    if (record.state !== 'in-progress') throw await settledConflict(scope, at, record, 'completed');
-    await assertNoRunningTimer(scope, at, 'complete the step');
-    const time = stampedTime(ctx, input);
-    await record.update({ state: 'done', completedBy: scope.actor.id, completedAt: time.at, note: input.note, hasDeviceTime: record.hasDeviceTime || time.isDeviceClock }, { transaction: scope.transaction });
-    await auditRun(scope, { action: 'run-step.completed', entityType: 'run', entityId: scope.run.id, after: { stepId, at: time.at, deviceTime: time.deviceTime, note: input.note } });
-    await settleRun(scope);
-    return stepResult(scope, stepId, []);
-  });
+  // The busiest write of the product: read with the run in one round trip, written with the stored answer in one more.
+  return runWrite(
+    ctx,
+    write,
+    runId,
+    200,
+    async (scope) => {
+      const at = stepAt(scope.content, scope.run, stepId);
+      const snapshot = scope.step ?? (await readStep(scope, stepId));
+      const { record } = snapshot;
+      if (record.state !== 'in-progress') throw await settledConflict(scope, at, record, 'completed');
+      const running = snapshot.runningTimers[0];
+      if (running) throw runningTimerConflict(at, running, 'complete the step');
+      const time = stampedTime(ctx, input);
+      scope.defer(updateRow(record, scope.connection, { state: 'done', completedBy: scope.actor.id, completedAt: time.at, note: input.note, hasDeviceTime: record.hasDeviceTime || time.isDeviceClock }));
+      scope.defer(auditRun(scope, { action: 'run-step.completed', entityType: 'run', entityId: scope.run.id, after: { stepId, at: time.at, deviceTime: time.deviceTime, note: input.note } }));
+      if (runProgress(scope.content.steps, snapshot.records).isComplete) await moveRun(scope, 'completed', 'completed');
+      return stepAnswer(scope, snapshot, []);
+    },
+    { step: stepId },
+  );
 }
 
 /** Pending or in progress → not done, with the reason; always a deviation. */
@@ -121,7 +133,7 @@ export function markStepNotDone(ctx: AppContext, write: TabletWrite, runId: numb
     if (record.state === 'done' || record.state === 'not-done') throw await settledConflict(scope, at, record, 'closed as not done');
     await assertNoRunningTimer(scope, at, 'close the step');
     const time = stampedTime(ctx, input);
-    await record.update({ state: 'not-done', notDoneReason: input.reason, completedBy: scope.actor.id, completedAt: time.at, hasDeviceTime: record.hasDeviceTime || time.isDeviceClock }, { transaction: scope.transaction });
+    await updateRow(record, scope.connection, { state: 'not-done', notDoneReason: input.reason, completedBy: scope.actor.id, completedAt: time.at, hasDeviceTime: record.hasDeviceTime || time.isDeviceClock });
     await auditRun(scope, { action: 'run-step.not-done', entityType: 'run', entityId: scope.run.id, after: { stepId, at: time.at, deviceTime: time.deviceTime }, reason: input.reason });
     const draft = deviationDraft('step-not-done', { step: at.ref, reason: input.reason });
     const deviation = await raiseDeviation(ctx, scope.actor, scope.run.id, draft, { stepId }, scope.transaction);

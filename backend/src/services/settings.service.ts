@@ -1,3 +1,5 @@
+import type { Transaction } from 'sequelize';
+
 import type { LabSettings } from '@tracewright/shared';
 
 import type { AppContext } from '../app-context';
@@ -8,9 +10,33 @@ const DEFAULTS: LabSettings = { labName: 'Our lab', timeZone: 'UTC', paperSize: 
 
 const toDto = (s: LabSettingsModel): LabSettings => ({ labName: s.labName, timeZone: s.timeZone, paperSize: s.paperSize });
 
-export async function getLabSettings(): Promise<LabSettings> {
-  const row = await LabSettingsModel.findByPk(1);
-  return row ? toDto(row) : DEFAULTS;
+/**
+ * The settings as last read, for at most KEEP_MS. Nearly every request needs the lab's time zone,
+ * and the settings change a few times a year; a change made here forgets them once it commits,
+ * and one made by another server process is seen within KEEP_MS.
+ */
+const KEEP_MS = 10_000;
+let known: { settings: Promise<LabSettings>; until: number } | null = null;
+
+export function getLabSettings(): Promise<LabSettings> {
+  if (known && Date.now() < known.until) return known.settings;
+  const settings = LabSettingsModel.findByPk(1).then((row) => (row ? toDto(row) : DEFAULTS));
+  const entry = { settings, until: Date.now() + KEEP_MS };
+  known = entry;
+  // A failed read is not kept: the next request asks the database again.
+  settings.catch(() => {
+    if (known === entry) known = null;
+  });
+  return settings;
+}
+
+/** Drops the kept settings, so the next read goes to the database. */
+export function forgetLabSettings(transaction?: Transaction): void {
+  if (transaction)
+    transaction.afterCommit(() => {
+      known = null;
+    });
+  else known = null;
 }
 
 export async function updateLabSettings(ctx: AppContext, actorId: number, input: LabSettings): Promise<LabSettings> {
@@ -25,6 +51,7 @@ export async function updateLabSettings(ctx: AppContext, actorId: number, input:
       { actorId, action: 'settings.updated', entityType: 'lab-settings', entityId: 1, before, after: toDto(saved) },
       transaction,
     );
+    forgetLabSettings(transaction);
     return toDto(saved);
   });
 }

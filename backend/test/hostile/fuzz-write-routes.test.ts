@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
 import { LabSettingsModel } from '../../src/models/lab-settings.model';
+import { forgetLabSettings } from '../../src/services/settings.service';
 import type { RouteSpec } from '../../src/routes/route-table';
 import { TEST_PASSWORD, type SignedIn } from '../fixtures';
 import { createTestContext, type TestContext } from '../test-context';
@@ -93,7 +94,10 @@ async function fuzzRoute(spec: RouteSpec, seed: number, { world, snapshot }: Lan
         expect(await snapshot({ withLabSettings: isSettings }), `nothing written on a 4xx: ${where}`).toBe(baseline);
       } else {
         // Other files read the lab's settings: a valid change the fuzzer made is put back at once.
-        if (isSettings && settings) await LabSettingsModel.update(settings.get(), { where: { id: settings.id } });
+        if (isSettings && settings) {
+          await LabSettingsModel.update(settings.get(), { where: { id: settings.id } });
+          forgetLabSettings();
+        }
         baseline = await snapshot({ withLabSettings: isSettings });
       }
     }),
