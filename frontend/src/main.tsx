@@ -1,4 +1,6 @@
 /// <reference types="vite-plugin-pwa/client" />
+// First: on a run view it asks for the session and the run before the rest of the app evaluates.
+import './early-requests';
 import './index.css';
 
 import { StrictMode } from 'react';

@@ -31,9 +31,11 @@ async function paintOnce(page: Page, runId: number, runCode: string): Promise<nu
   await cdp.send('Network.enable');
   await cdp.send('Network.emulateNetworkConditions', NETWORK);
   await page.goto(`/run/${runId}`, { waitUntil: 'load', timeout: 60_000 });
+  // Quiet first, then one look: polling the page for text while it loads runs Playwright's
+  // selector engine on the same throttled main thread and delayed the very paint being measured.
+  await page.waitForLoadState('networkidle', { timeout: 60_000 });
   // The run header names the run: proof the page shows the run, not a sign-in form or an error.
   await page.getByText(`Run ${runCode}`).first().waitFor({ timeout: 60_000 });
-  await page.waitForLoadState('networkidle', { timeout: 60_000 });
   return await page.evaluate(
     () =>
       new Promise<number>((resolve) => {

@@ -1,5 +1,6 @@
 import { ApiErrorBodySchema, type ErrorCode } from '@tracewright/shared';
 
+import { takeEarlyGet } from '../early-requests';
 import { ApiError } from './api-error';
 import { readCookie } from './cookies';
 
@@ -59,13 +60,16 @@ async function request(method: Method, path: string, options: RequestOptions = {
   }
   let response: Response;
   try {
-    response = await fetch(buildUrl(path, options.query), {
-      method,
-      headers,
-      credentials: 'same-origin',
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
-      signal: options.signal,
-    });
+    // A run view's first GETs may have been sent before the app ran (src/early-requests.ts).
+    const early = method === 'GET' && !options.query ? takeEarlyGet(path) : undefined;
+    response = await (early ??
+      fetch(buildUrl(path, options.query), {
+        method,
+        headers,
+        credentials: 'same-origin',
+        body: options.body === undefined ? undefined : JSON.stringify(options.body),
+        signal: options.signal,
+      }));
   } catch (error) {
     if (error instanceof DOMException && error.name === 'AbortError') throw error;
     throw new ApiError(0, 'SERVICE_UNAVAILABLE', "Can't reach the server. Check the network connection and try again.");

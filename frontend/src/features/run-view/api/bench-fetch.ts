@@ -1,5 +1,6 @@
 import { ApiErrorBodySchema } from '@tracewright/shared';
 
+import { takeEarlyGet } from '../../../early-requests';
 import { CSRF_COOKIE, CSRF_HEADER } from '../../../lib/api-client';
 import { ApiError } from '../../../lib/api-error';
 import { readCookie } from '../../../lib/cookies';
@@ -35,13 +36,16 @@ export async function benchFetch({ method, path, json, form, idempotencyKey, sig
   }
   let response: Response;
   try {
-    response = await fetch(new URL(path, window.location.origin), {
-      method,
-      headers,
-      credentials: 'same-origin',
-      body: form ?? (json === undefined ? undefined : JSON.stringify(json)),
-      signal,
-    });
+    // The run's first GET may have been sent before the app ran (src/early-requests.ts).
+    const early = method === 'GET' ? takeEarlyGet(path) : undefined;
+    response = await (early ??
+      fetch(new URL(path, window.location.origin), {
+        method,
+        headers,
+        credentials: 'same-origin',
+        body: form ?? (json === undefined ? undefined : JSON.stringify(json)),
+        signal,
+      }));
   } catch (error) {
     if (error instanceof DOMException && error.name === 'AbortError') throw error;
     throw new ApiError(0, 'SERVICE_UNAVAILABLE', UNREACHABLE);

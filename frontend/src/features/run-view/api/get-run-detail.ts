@@ -37,7 +37,11 @@ export async function getRunSnapshot(runId: number, signal?: AbortSignal): Promi
       requestedAt: new Date(requestedAtMs).toISOString(),
       isFresh: true,
     };
-    await benchStore().putRunSnapshot(snapshot);
+    // Kept for offline use without holding up the page: opening the tablet's store and writing
+    // cost a slow tablet a quarter of a second before the run could show (bench: paint).
+    void benchStore()
+      .putRunSnapshot(snapshot)
+      .catch(() => undefined);
     return snapshot;
   } catch (error) {
     if (!isUnreachable(error)) throw error;

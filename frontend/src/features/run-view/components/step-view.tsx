@@ -19,8 +19,12 @@ import { StepDeviations } from './step-deviations';
 import { StepHeading } from './step-heading';
 import { StepTools } from './step-tools';
 
-/** One step filling the screen: what to set, how, the cautions, and the step's own actions. */
-export function StepView({ step, number }: { step: RecipeStep; number: number }) {
+/**
+ * One step filling the screen: what to set, how, the cautions, and the step's own actions.
+ * `slidesIn` when the operator moved to it; the page's first step appears at once (an entrance
+ * there only delays the first useful paint: bench: paint).
+ */
+export function StepView({ step, number, slidesIn = false }: { step: RecipeStep; number: number; slidesIn?: boolean }) {
   const { run, record: keep, isWorkable } = useBench();
   const [isClosing, setIsClosing] = useState(false);
   const record = recordOf(run, step.id);
@@ -30,7 +34,10 @@ export function StepView({ step, number }: { step: RecipeStep; number: number })
   const isOpen = record.state === 'pending' || record.state === 'in-progress';
 
   return (
-    <article aria-labelledby="step-title" className="flex flex-col gap-5 motion-safe:transition motion-safe:duration-300 motion-safe:starting:translate-x-8 motion-safe:starting:opacity-0">
+    <article
+      aria-labelledby="step-title"
+      className={`flex flex-col gap-5 ${slidesIn ? 'motion-safe:transition motion-safe:duration-300 motion-safe:starting:translate-x-8 motion-safe:starting:opacity-0' : ''}`}
+    >
       <StepHeading step={step} number={number} total={run.content.steps.length} record={record} />
       {cautions.length > 0 ? <SafetyCard stepId={step.id} notes={cautions} record={record} /> : null}
       <div className="grid gap-6 landscape:lg:grid-cols-2">

@@ -6,14 +6,15 @@ import type { Session } from '@tracewright/shared';
 import { runViewKeys } from '../api/run-view-keys';
 import { sendWrite } from '../api/send-write';
 import { createOutbox, type Outbox } from '../outbox/outbox-engine';
+import type { OutboxItem } from '../outbox/outbox-types';
 import { benchStore } from '../storage/bench-store-instance';
 import { alarmAcks } from '../utils/alarm-acks';
 
 /**
- * The page's outbox: loaded from the tablet's store on arrival, sent whenever the network comes
+ * The page's outbox: loaded from the tablet's store on arrival (or handed the writes the loader read), sent whenever the network comes
  * back or the page is shown again, and the run refetched after each round that sent something.
  */
-export function useBenchOutbox(user: Session['user']): Outbox {
+export function useBenchOutbox(user: Session['user'], initialItems: OutboxItem[] | null = null): Outbox {
   const queryClient = useQueryClient();
   const userRef = useRef(user);
   useEffect(() => {
@@ -29,6 +30,7 @@ export function useBenchOutbox(user: Session['user']): Outbox {
         if (item.kind === 'start-timer' && item.resultId !== null) alarmAcks.alias(item.id, `srv:${item.resultId}`);
       },
       onRoundSent: () => void queryClient.invalidateQueries({ queryKey: runViewKeys.all }),
+      initialItems,
     }),
   );
 

@@ -66,6 +66,24 @@ describe('outbox', () => {
     expect(api.recorded.map((w) => w.path.split('/').pop())).toEqual(['start', 'complete']);
   });
 
+  it('when the page is handed the writes its loader read, then it shows them at once without reading the store again, and sends them', async () => {
+    const api = fakeRunApi(() => aRun());
+    server.use(...api.handlers);
+    const store = createMemoryBenchStore({ isDurable: true });
+    const before = anOutbox({ store, isOnline: () => false });
+    await before.enqueue(writeDrafts.startStep(RUN_ID, CURE_STEP_ID));
+    before.dispose();
+    const read = await store.listWrites();
+    const listWrites = vi.spyOn(store, 'listWrites');
+
+    const after = anOutbox({ store, isOnline: () => true, initialItems: read });
+    expect(after.getState()).toMatchObject({ isLoaded: true, items: read });
+    await after.drain();
+
+    expect(listWrites).not.toHaveBeenCalled();
+    expect(api.recorded.map((w) => w.path.split('/').pop())).toEqual(['start']);
+  });
+
   it('when the server refuses a write, then it stops there, later writes wait, and dropping it lets them go', async () => {
     const api = fakeRunApi(() => aRun(), (write) => (write.path.endsWith('/start') ? HttpResponse.json({ error: { code: 'FORBIDDEN', message: 'Operators only.' } }, { status: 403 }) : { id: 1 }));
     server.use(...api.handlers);

@@ -37,6 +37,19 @@ describe('run page: safety card', () => {
     expect(api.recorded[0]?.body).toMatchObject({ noteCodes: ['hot-surface'], madeOffline: false });
   });
 
+  it('when the run opens, then its step shows at once; when the operator moves on, then the next card slides in', async () => {
+    const api = fakeRunApi(() => aRun());
+    server.use(...api.handlers);
+    const { user } = renderApp('/run/7');
+
+    const first = (await findStepHeading('Cure the silver heater trace')).closest('article');
+    // An entrance on the first card would only hold back the first useful paint.
+    expect(first?.className).not.toMatch(/starting:opacity-0/);
+    await user.click(screen.getByRole('button', { name: 'Next step' }));
+    await waitFor(() => expect(screen.getByRole('article').className).toMatch(/starting:opacity-0/), SLOW);
+    expect(screen.getByRole('article')).not.toBe(first);
+  });
+
   it('when the person is not signed in, then the run page sends them to sign in and back to this run', async () => {
     server.use(http.get('/api/auth/session', () => apiError(401, 'UNAUTHENTICATED', 'Sign in to go on.')));
     const { router } = renderApp('/run/7');

@@ -33,6 +33,10 @@ export function RunScreen({ runId }: { runId: number }) {
   const run = useMemo(() => applyWrites(snapshot.run, items, snapshot.clockOffsetMs), [snapshot, items]);
   const { step, index, goToStep } = useStepChoice(run);
   const steps = run.content.steps;
+  // Once the shown step is not the first one, every step change slides the new card in.
+  const [firstStepId] = useState(() => step?.id ?? null);
+  const [hasMoved, setHasMoved] = useState(false);
+  if (!hasMoved && step && step.id !== firstStepId) setHasMoved(true);
 
   useEffect(() => {
     // A fresh answer includes every write sent before it was asked for: those can be forgotten.
@@ -67,7 +71,7 @@ export function RunScreen({ runId }: { runId: number }) {
           <OutboxAlerts />
           <TimerTray steps={steps} currentStepId={step?.id ?? null} />
           {/* Clip sideways: the step card slides in from the side and must not flash a scrollbar. */}
-          <main className="flex-1 overflow-x-clip px-4 py-5">{step ? <StepView key={step.id} step={step} number={index + 1} /> : <p>This recipe version has no steps.</p>}</main>
+          <main className="flex-1 overflow-x-clip px-4 py-5">{step ? <StepView key={step.id} step={step} number={index + 1} slidesIn={hasMoved} /> : <p>This recipe version has no steps.</p>}</main>
           {step ? <ActionBar step={step} previousId={steps[index - 1]?.id ?? null} nextId={steps[index + 1]?.id ?? null} onGo={goToStep} onReport={() => setOpen('report')} /> : null}
         </div>
         {open === 'steps' && step ? <StepsDrawer currentStepId={step.id} onClose={() => setOpen(null)} /> : null}
