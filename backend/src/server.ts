@@ -3,6 +3,7 @@ import type { Server } from 'node:http';
 import { createApp } from './app';
 import { closeAppContext, createAppContext, migrateDatabase } from './bootstrap';
 import { loadEnv } from './config/env';
+import { startIdempotencyKeyPurge } from './services/idempotency-retention';
 
 /** Starts the HTTP server: migrate, connect, listen; stops cleanly on SIGINT/SIGTERM. */
 async function main() {
@@ -14,11 +15,13 @@ async function main() {
   const server: Server = app.listen(env.PORT, env.HOST, () => {
     ctx.logger.info({ url: env.PUBLIC_URL, host: env.HOST, port: env.PORT }, 'Tracewright is listening');
   });
+  const stopPurge = startIdempotencyKeyPurge(ctx);
   let stopping = false;
   const stop = (signal: string) => {
     if (stopping) return;
     stopping = true;
     ctx.logger.info({ signal }, 'stopping');
+    stopPurge();
     server.close(() => {
       void closeAppContext(ctx).finally(() => process.exit(0));
     });

@@ -1,14 +1,20 @@
 import { Link } from 'react-router';
 
+import type { RunState } from '@tracewright/shared';
+
 import { Icon } from '../../../components/icons/icon';
 import { buttonClasses } from '../../../components/ui/button-styles';
 
+/** Runs that take no more records: the tablet can only show them. */
+const READ_ONLY: readonly RunState[] = ['closed', 'cancelled'];
+
 /** Where a run record leads: the tablet view, its printouts, and its readings as a spreadsheet. */
-export function RecordLinks({ runId }: { runId: number }) {
+export function RecordLinks({ runId, state }: { runId: number; state: RunState }) {
+  const isReadOnly = READ_ONLY.includes(state);
   return (
     <>
-      <Link to={`/run/${runId}`} className={buttonClasses('primary')}>
-        Open on tablet
+      <Link to={`/run/${runId}`} className={buttonClasses(isReadOnly ? 'secondary' : 'primary')}>
+        {isReadOnly ? 'Tablet view (read only)' : 'Open on tablet'}
       </Link>
       <Link to={`/runs/${runId}/traveller`} className={buttonClasses('secondary')}>
         <Icon name="printer" />

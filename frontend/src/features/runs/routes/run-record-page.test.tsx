@@ -87,6 +87,14 @@ describe('run record page', () => {
     expect(screen.queryByRole('button', { name: 'Put on hold' })).not.toBeInTheDocument();
   });
 
+  it('when the run is closed, then the tablet link says the view is read only', async () => {
+    server.use(...signedInAs('operator'), ...runPagesApi({ run: aRunDetail({ state: 'closed' }) }));
+    renderApp('/runs/42');
+
+    expect(await screen.findByRole('link', { name: 'Tablet view (read only)' })).toHaveAttribute('href', '/run/42');
+    expect(screen.queryByRole('link', { name: 'Open on tablet' })).not.toBeInTheDocument();
+  });
+
   it('when quality signs off a completed run with the password, then the hash read is sent and the record shows who signed, when, and what it means', async () => {
     let run: RunDetail = aRunDetail({ state: 'completed' });
     let view = aSignOffView(run);

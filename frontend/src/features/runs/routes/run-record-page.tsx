@@ -33,7 +33,7 @@ export function RunRecordPage() {
       <title>{`Run ${run.code} · Tracewright`}</title>
       <PrintStyles paperSize={settings.paperSize} />
       <RunPageToolbar back={{ to: '/runs', label: 'All runs' }}>
-        <RecordLinks runId={run.id} />
+        <RecordLinks runId={run.id} state={run.state} />
         <PrintButton label="Print record" variant="secondary" />
       </RunPageToolbar>
       <article data-print-root aria-labelledby="record-title" className="flex flex-col gap-6">
