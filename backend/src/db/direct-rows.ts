@@ -148,7 +148,7 @@ export async function findRow<M extends Model>(model: ModelStatic<M>, connection
 }
 
 /** A duplicate key is the same UniqueConstraintError Sequelize throws, so callers and the error handler treat both alike. */
-async function writing<T>(query: Promise<T>): Promise<T> {
+export async function writing<T>(query: Promise<T>): Promise<T> {
   try {
     return await query;
   } catch (err) {

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
 import { AuditEventModel } from '../models/audit-event.model';
 import { createTestContext, type TestContext } from '../../test/test-context';
-import { connectionOf, findRow, insertRow } from './direct-rows';
+import { connectionOf, findRow, insertRow, withConnection } from './direct-rows';
 import { pipelinedTransaction } from './pipelined-transaction';
 
 let t: TestContext;
@@ -44,5 +44,11 @@ describe('pipelined transaction', () => {
     // The pool has 5 connections: eight rollbacks that kept theirs would have hung the next read.
     const seen = await pipelinedTransaction(t.ctx.sequelize, (transaction) => findRow(AuditEventModel, connectionOf(transaction), { action }));
     expect(seen).toBeNull();
+  });
+
+  it('when the first statement follows the unanswered START TRANSACTION, then it already runs inside the transaction (the key claim relies on it)', async () => {
+    const inside = await pipelinedTransaction(t.ctx.sequelize, async (transaction) => (await connectionOf(transaction).query('SELECT @@in_transaction AS open')) as Array<{ open: number }>);
+    const outside = await withConnection(t.ctx.sequelize, async (c) => (await c.query('SELECT @@in_transaction AS open')) as Array<{ open: number }>);
+    expect([Number(inside[0]?.open), Number(outside[0]?.open)]).toEqual([1, 0]);
   });
 });

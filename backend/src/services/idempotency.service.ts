@@ -1,7 +1,8 @@
+import type { Connection } from 'mariadb';
 import type { Transaction } from 'sequelize';
 
 import type { AppContext } from '../app-context';
-import { connectionOf, insertRow } from '../db/direct-rows';
+import { connectionOf, writing } from '../db/direct-rows';
 import { pipelinedTransaction } from '../db/pipelined-transaction';
 import { unprocessable } from '../errors/app-error';
 import { IdempotencyKeyModel } from '../models/idempotency-key.model';
@@ -49,6 +50,20 @@ export async function storedAnswer<T>(claim: IdempotencyClaim): Promise<WriteRes
   return { status: row.statusCode, body: parseJsonColumn<T>(row.responseBody, null as T), isReplay: true };
 }
 
+/**
+ * Inserts the key row unanswered, only inside a transaction: it travels right behind a START
+ * TRANSACTION whose answer is not awaited (db/pipelined-transaction), and a claim committed on its
+ * own would block its key for good. Resolves to the row's id.
+ */
+async function claimKey(connection: Connection, claim: IdempotencyClaim, at: Date): Promise<number> {
+  const sql =
+    'INSERT INTO idempotency_keys (user_id, idempotency_key, method, path, request_hash, status_code, response_body, created_at) ' +
+    'SELECT ?, ?, ?, ?, ?, NULL, NULL, ? FROM DUAL WHERE @@in_transaction = 1';
+  const result = (await writing(connection.query(sql, [claim.userId, claim.key, claim.method, claim.path, claim.requestHash, at]))) as { affectedRows: number; insertId: number | bigint };
+  if (result.affectedRows !== 1) throw new Error('The Idempotency-Key was not claimed: no transaction was open.');
+  return Number(result.insertId);
+}
+
 /** Sends a write now and waits for it only at the end, with the key's answer, before the commit. */
 export type DeferWrite = (write: Promise<unknown>) => void;
 
@@ -76,9 +91,7 @@ export async function idempotentTransaction<T>(
         write.catch(() => undefined);
         pending.push(write);
       };
-      const keyRow = claim
-        ? insertRow(IdempotencyKeyModel, connection, { userId: claim.userId, idempotencyKey: claim.key, method: claim.method, path: claim.path, requestHash: claim.requestHash, statusCode: null, responseBody: null, createdAt: ctx.clock.now() })
-        : null;
+      const keyRow = claim ? claimKey(connection, claim, ctx.clock.now()) : null;
       keyRow?.catch(() => undefined);
       // A JSON round trip, so the first answer is byte for byte what a replay will send.
       const body = JSON.parse(JSON.stringify(await work(transaction, keep))) as T;
