@@ -93,7 +93,10 @@ describe('steps', () => {
   it('when an unknown step or run is named, then 404; a malformed step id, then 400', async () => {
     const run = await newRun();
     expect((await step(run.id, 'no-such-step', 'start')).status).toBe(404);
+    const unknownCompleted = await step(run.id, 'no-such-step', 'complete');
+    expect([unknownCompleted.status, unknownCompleted.body.error.message]).toEqual([404, `Step “no-such-step” in run ${run.code} not found.`]);
     expect((await step(99_999_999, 'plasma-1', 'start')).status).toBe(404);
+    expect((await step(99_999_999, 'plasma-1', 'complete')).status).toBe(404);
     expect((await step(run.id, 'x', 'start')).status).toBe(400);
   });
 

@@ -59,7 +59,9 @@ export async function runWrite<T>(
     const [{ run, content }, stepRows] = await Promise.all([lockRunWithContent(transaction, runId), options.step ? readStepRows(connection, runId, options.step) : null]);
     assertAcceptsWrites(run);
     const scope: RunScope = { ctx, actor: write.actor, run, content, transaction, connection, today, defer, step: null };
-    if (options.step && stepRows) scope.step = stepSnapshot(scope, options.step, stepRows);
+    // A step the recipe does not have is left to the work, which answers 404 naming it.
+    const { step } = options;
+    if (step && stepRows && content.steps.some((s) => s.id === step)) scope.step = stepSnapshot(scope, step, stepRows);
     return work(scope);
   });
 }
