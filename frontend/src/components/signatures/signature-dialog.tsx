@@ -6,10 +6,10 @@ import { ROLE_LABELS, SignatureInputSchema, type Session } from '@tracewright/sh
 
 import { type ApiError, isApiError } from '../../lib/api-error';
 import { applyApiErrorToForm } from '../../lib/form-errors';
-import { Button } from '../ui/button';
 import { FormError } from '../ui/form-error';
 import { ModalDialog } from '../ui/modal-dialog';
 import { TextField } from '../ui/text-field';
+import { DialogActions } from '../ui/dialog-actions';
 
 const PasswordSchema = SignatureInputSchema.pick({ password: true });
 
@@ -82,14 +82,9 @@ export function SignatureDialog({ title, meaning, signer, contentHash, signLabel
           error={errors.password?.message}
           {...register('password')}
         />
-        <div className="flex flex-wrap gap-3">
-          <Button type="submit" isPending={isSubmitting} pendingLabel="Signing…">
-            {signLabel}
-          </Button>
-          <Button variant="secondary" onClick={onClose}>
-            Cancel
-          </Button>
-        </div>
+        <DialogActions isPending={isSubmitting} pendingLabel="Signing…" onCancel={onClose}>
+          {signLabel}
+        </DialogActions>
       </form>
     </ModalDialog>
   );

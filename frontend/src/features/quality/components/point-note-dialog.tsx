@@ -3,7 +3,6 @@ import { useForm } from 'react-hook-form';
 
 import { TrendPointNoteInputSchema, type Trend } from '@tracewright/shared';
 
-import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
 import { useToast } from '../../../components/ui/use-toast';
 import { applyApiErrorToForm } from '../../../lib/form-errors';
@@ -11,6 +10,7 @@ import { useNoteTrendPoint } from '../api/note-trend-point';
 import { valueText } from '../utils/trend-text';
 import { ModalDialog } from '../../../components/ui/modal-dialog';
 import { TextAreaField } from './text-area-field';
+import { DialogActions } from '../../../components/ui/dialog-actions';
 
 export type PointNoteMode = 'exclude' | 'include' | 'annotate';
 type Point = Trend['points'][number];
@@ -55,14 +55,9 @@ export function PointNoteDialog({ point, position, unit, mode, onClose }: PointN
         </p>
         <FormError message={errors.root?.server?.message} />
         <TextAreaField label="Reason" rows={3} help={words.help} error={errors.reason?.message} {...register('reason')} />
-        <div className="flex flex-wrap gap-3">
-          <Button type="submit" isPending={note.isPending} pendingLabel="Saving…">
-            {words.action}
-          </Button>
-          <Button variant="secondary" onClick={onClose}>
-            Cancel
-          </Button>
-        </div>
+        <DialogActions isPending={note.isPending} pendingLabel="Saving…" onCancel={onClose}>
+          {words.action}
+        </DialogActions>
       </form>
     </ModalDialog>
   );

@@ -3,13 +3,13 @@ import { useForm } from 'react-hook-form';
 
 import { ROLE_LABELS, type Session, ReleaseVersionInputSchema, type RecipeVersionView } from '@tracewright/shared';
 
-import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
 import { TextField } from '../../../components/ui/text-field';
 import { isApiError } from '../../../lib/api-error';
 import { applyApiErrorToForm } from '../../../lib/form-errors';
 import { useReleaseVersion } from '../api/release-version';
 import { ModalDialog } from '../../../components/ui/modal-dialog';
+import { DialogActions } from '../../../components/ui/dialog-actions';
 
 type ReleaseDialogProps = { view: RecipeVersionView; signer: Session['user']; onReleased: () => void; onClose: () => void };
 
@@ -58,14 +58,9 @@ export function ReleaseDialog({ view, signer, onReleased, onClose }: ReleaseDial
         </p>
         <FormError message={errors.root?.server?.message} />
         <TextField label="Your password" type="password" autoComplete="current-password" help="Entering it signs the release in your name." error={errors.password?.message} {...register('password')} />
-        <div className="flex flex-wrap gap-3">
-          <Button type="submit" isPending={release.isPending} pendingLabel="Signing…">
-            Sign and release
-          </Button>
-          <Button variant="secondary" onClick={onClose}>
-            Cancel
-          </Button>
-        </div>
+        <DialogActions isPending={release.isPending} pendingLabel="Signing…" onCancel={onClose}>
+          Sign and release
+        </DialogActions>
       </form>
     </ModalDialog>
   );

@@ -3,12 +3,12 @@ import { useForm } from 'react-hook-form';
 
 import { SendBackInputSchema, type RecipeVersionView } from '@tracewright/shared';
 
-import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
 import { applyApiErrorToForm } from '../../../lib/form-errors';
 import { useSendBackVersion } from '../api/send-back-version';
 import { ModalDialog } from '../../../components/ui/modal-dialog';
 import { TextAreaField } from './text-area-field';
+import { DialogActions } from '../../../components/ui/dialog-actions';
 
 type SendBackDialogProps = { view: RecipeVersionView; onSentBack: () => void; onClose: () => void };
 
@@ -31,14 +31,9 @@ export function SendBackDialog({ view, onSentBack, onClose }: SendBackDialogProp
       <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
         <FormError message={errors.root?.server?.message} />
         <TextAreaField label="What needs to change" rows={5} help="The author sees this on the draft and by e-mail." error={errors.comment?.message} {...register('comment')} />
-        <div className="flex flex-wrap gap-3">
-          <Button type="submit" isPending={sendBack.isPending} pendingLabel="Sending…">
-            Send back
-          </Button>
-          <Button variant="secondary" onClick={onClose}>
-            Cancel
-          </Button>
-        </div>
+        <DialogActions isPending={sendBack.isPending} pendingLabel="Sending…" onCancel={onClose}>
+          Send back
+        </DialogActions>
       </form>
     </ModalDialog>
   );
