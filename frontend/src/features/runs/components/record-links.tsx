@@ -1,16 +1,14 @@
 import { Link } from 'react-router';
 
-import type { RunState } from '@tracewright/shared';
+import { allowedRunTransitions, type RunState } from '@tracewright/shared';
 
 import { Icon } from '../../../components/icons/icon';
 import { buttonClasses } from '../../../components/ui/button-styles';
 
-/** Runs that take no more records: the tablet can only show them. */
-const READ_ONLY: readonly RunState[] = ['closed', 'cancelled'];
-
 /** Where a run record leads: the tablet view, its printouts, and its readings as a spreadsheet. */
 export function RecordLinks({ runId, state }: { runId: number; state: RunState }) {
-  const isReadOnly = READ_ONLY.includes(state);
+  // A final run (closed, cancelled: no move left) takes no more records; the tablet can only show it.
+  const isReadOnly = allowedRunTransitions(state).length === 0;
   return (
     <>
       <Link to={`/run/${runId}`} className={buttonClasses(isReadOnly ? 'secondary' : 'primary')}>

@@ -87,8 +87,8 @@ describe('run record page', () => {
     expect(screen.queryByRole('button', { name: 'Put on hold' })).not.toBeInTheDocument();
   });
 
-  it('when the run is closed, then the tablet link says the view is read only', async () => {
-    server.use(...signedInAs('operator'), ...runPagesApi({ run: aRunDetail({ state: 'closed' }) }));
+  it.each(['closed', 'cancelled'] as const)('when the run is %s, then the tablet link says the view is read only', async (state) => {
+    server.use(...signedInAs('operator'), ...runPagesApi({ run: aRunDetail({ state }) }));
     renderApp('/runs/42');
 
     expect(await screen.findByRole('link', { name: 'Tablet view (read only)' })).toHaveAttribute('href', '/run/42');
