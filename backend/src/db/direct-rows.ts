@@ -107,28 +107,13 @@ function whereClause(shape: Shape, where: Record<string, unknown>): { sql: strin
   return { sql: parts.join(' AND '), params };
 }
 
-/**
- * The rows matching `where` as plain values (no model instances): for rows only read, where
- * building instances would cost more than the query (~30 µs each).
- */
-export async function findPlainRows<M extends Model>(model: ModelStatic<M>, connection: Connection, where: RowWhere<M>): Promise<Array<Attributes<M>>> {
-  const shape = shapeOf(model as ModelStatic<Model>);
-  const condition = whereClause(shape, where as Record<string, unknown>);
-  const rows = (await connection.query(`SELECT ${shape.selectList} FROM \`${shape.table}\` WHERE ${condition.sql}`, condition.params)) as Array<Record<string, unknown>>;
-  return rows.map((row) => {
-    const values: Record<string, unknown> = {};
-    for (const c of shape.columns) values[c.name] = fromSql(c, row[c.field]);
-    return values as Attributes<M>;
-  });
-}
+type FindOptions<M extends Model> = { lock?: boolean; orderBy?: keyof Attributes<M> & string };
 
-/** Model instances for the rows matching `where` (equality, null as IS NULL); `lock` reads FOR UPDATE. */
-export async function findRows<M extends Model>(
-  model: ModelStatic<M>,
-  connection: Connection,
-  where: RowWhere<M>,
-  options: { lock?: boolean; orderBy?: keyof Attributes<M> & string } = {},
-): Promise<M[]> {
+/**
+ * The rows matching `where` (equality, null as IS NULL) as plain values: for rows only read, where
+ * building instances would cost more than the query (~30 µs each). `lock` reads FOR UPDATE.
+ */
+export async function findPlainRows<M extends Model>(model: ModelStatic<M>, connection: Connection, where: RowWhere<M>, options: FindOptions<M> = {}): Promise<Array<Attributes<M>>> {
   const shape = shapeOf(model as ModelStatic<Model>);
   const condition = whereClause(shape, where as Record<string, unknown>);
   const order = options.orderBy ? ` ORDER BY \`${column(shape, options.orderBy).field}\`` : '';
@@ -138,8 +123,13 @@ export async function findRows<M extends Model>(
   return rows.map((row) => {
     const values: Record<string, unknown> = {};
     for (const c of shape.columns) values[c.name] = fromSql(c, row[c.field]);
-    return model.build(values as never, { isNewRecord: false, raw: true });
+    return values as Attributes<M>;
   });
+}
+
+/** The same rows as model instances, for rows the caller goes on to change. */
+export async function findRows<M extends Model>(model: ModelStatic<M>, connection: Connection, where: RowWhere<M>, options: FindOptions<M> = {}): Promise<M[]> {
+  return (await findPlainRows(model, connection, where, options)).map((values) => model.build(values as never, { isNewRecord: false, raw: true }));
 }
 
 /** The first matching row, or null. */
