@@ -1,6 +1,6 @@
 import { spawn } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { cpus, tmpdir } from 'node:os';
 import { join } from 'node:path';
 
 import express, { type Express } from 'express';
@@ -17,6 +17,7 @@ import { signIn, type BenchStack } from './bench-stack';
 import { info, type Figure } from './figures-table';
 import type { LoadJob, LoadResult } from './load-driver';
 import { percentile } from './percentiles';
+import { measureCpu } from './process-cpu';
 
 const CONNECTIONS = 50;
 const SECONDS = 20;
@@ -76,7 +77,12 @@ interface Totals {
   latencies: number[];
   failed: number;
   problem: string | null;
+  /** CPU of the app server's process and of mariadbd over the recorded rounds, in µs (null: not readable). */
+  appMicros: number;
+  databaseMicros: number | null;
 }
+
+const emptyTotals = (): Totals => ({ perSecond: [], latencies: [], failed: 0, problem: null, appMicros: 0, databaseMicros: 0 });
 
 /**
  * Baseline (A) and the real step-completion route (B), alternated A B A B so drift on a busy
@@ -87,7 +93,8 @@ export async function measureWritesAb(stack: BenchStack): Promise<Figure[]> {
   const operator = await signIn(stack.baseUrl, 'operator@larkspur-lab.example', DEMO_PASSWORD);
   const targets = await prepareWriteRuns(stack.ctx, operator.userId);
   const workDir = mkdtempSync(join(tmpdir(), 'tw-bench-'));
-  const totals = { baseline: { perSecond: [], latencies: [], failed: 0, problem: null } as Totals, real: { perSecond: [], latencies: [], failed: 0, problem: null } as Totals };
+  const totals = { baseline: emptyTotals(), real: emptyTotals() };
+  const databasePid = stack.db.instance.process().pid;
   const realHeaders = { cookie: operator.cookie, 'x-csrf-token': operator.csrf };
   let offset = 0;
   let completedOk = 0;
@@ -97,7 +104,7 @@ export async function measureWritesAb(stack: BenchStack): Promise<Figure[]> {
         kind === 'baseline'
           ? { url: `${stack.baseUrl}/bench/baseline`, connections: CONNECTIONS, seconds, headers: {} }
           : { url: stack.baseUrl, connections: CONNECTIONS, seconds, headers: realHeaders, targets, offset };
-      const result = await runDriver(job, workDir);
+      const { result, appMicros, databaseMicros } = await measureCpu(databasePid, () => runDriver(job, workDir));
       if (kind === 'real') {
         offset += result.used;
         completedOk += result.latenciesMs.length - result.non2xx;
@@ -108,6 +115,8 @@ export async function measureWritesAb(stack: BenchStack): Promise<Figure[]> {
       t.latencies.push(...result.latenciesMs);
       t.failed += result.non2xx + result.errors;
       t.problem ??= result.firstProblem;
+      t.appMicros += appMicros;
+      t.databaseMicros = t.databaseMicros === null || databaseMicros === null ? null : t.databaseMicros + databaseMicros;
     };
     // A short unrecorded warm-up of each, so neither side pays for the JIT or a cold pool.
     await round('baseline', 3, false);
@@ -119,6 +128,30 @@ export async function measureWritesAb(stack: BenchStack): Promise<Figure[]> {
   if (offset > targets.length) totals.real.problem ??= `ran out of prepared steps (${offset} requests for ${targets.length} steps)`;
   const done = await stack.ctx.sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM run_step_records r JOIN runs u ON u.id = r.run_id WHERE u.code LIKE 'W-%' AND r.state = 'done'", { type: QueryTypes.SELECT });
   return writeFigures(totals, completedOk, Number(done[0]?.n ?? 0));
+}
+
+const perRequest = (micros: number, t: Totals) => micros / Math.max(1, t.latencies.length);
+
+/**
+ * Where the time goes: server CPU per answered request, the app's process and mariadbd apart (the
+ * load driver is a process of its own and not counted). The ceiling is the completion rate the
+ * machine's cores could carry at that CPU if the app and the database kept them all busy, over the
+ * baseline's measured rate; the last figure is the CPU a completion may use for the ≥ 0.5 budget
+ * to be reachable at all on this machine.
+ */
+function cpuFigures(totals: { baseline: Totals; real: Totals }): Figure[] {
+  const { baseline, real } = totals;
+  if (baseline.databaseMicros === null || real.databaseMicros === null) return [];
+  const realPerRequest = perRequest(real.appMicros + real.databaseMicros, real);
+  const ceiling = (cpus().length * 1_000_000) / realPerRequest / mean(baseline.perSecond);
+  return [
+    info('writes', 'baseline CPU per request: app server', perRequest(baseline.appMicros, baseline), 'µs'),
+    info('writes', 'baseline CPU per request: MariaDB', perRequest(baseline.databaseMicros, baseline), 'µs'),
+    info('writes', 'step completion CPU per request: app server', perRequest(real.appMicros, real), 'µs'),
+    info('writes', 'step completion CPU per request: MariaDB', perRequest(real.databaseMicros, real), 'µs'),
+    info('writes', `ratio ceiling from server CPU (${cpus().length} cores all busy)`, ceiling, '×'),
+    info('writes', 'server CPU per completion that 0.5 allows', (cpus().length * 1_000_000) / (0.5 * mean(baseline.perSecond)), 'µs'),
+  ];
 }
 
 const mean = (xs: readonly number[]) => xs.reduce((a, b) => a + b, 0) / Math.max(1, xs.length);
@@ -140,6 +173,7 @@ function writeFigures(totals: { baseline: Totals; real: Totals }, completedOk: n
     info('writes', 'step completion p50', percentile(totals.real.latencies, 50), 'ms'),
     { group: 'writes', name: 'step completion p95', value: p95, unit: 'ms', target: '≤ 50 ms', ok: p95 <= 50 },
     info('writes', 'step completion p99', percentile(totals.real.latencies, 99), 'ms'),
+    ...cpuFigures(totals),
     { group: 'writes', name: 'non-2xx or failed answers (both routes)', value: totals.baseline.failed + totals.real.failed, unit: '', target: '0', ok: totals.baseline.failed + totals.real.failed === 0 },
     // Every 2xx completion must be in the database: the figure that shows the route did the work. A round
     // ends with up to one request per connection still in flight, which the server completes unseen.
