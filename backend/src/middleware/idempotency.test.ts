@@ -1,40 +1,25 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
 import { AuditEventModel } from '../models/audit-event.model';
 import { DeviationModel } from '../models/deviation.model';
 import { RunStepRecordModel } from '../models/run-step-record.model';
 import { RunTimerModel } from '../models/run-timer.model';
-import { signedInUser, type SignedIn } from '../../test/fixtures';
-import { createRunRecords, doStep, newKey, planRun, post, releasedVersion, runnableContent, startStep } from '../../test/run-fixtures';
-import { createTestContext, TestClock, type TestContext } from '../../test/test-context';
+import { setUpRunLab } from '../../test/run-lab';
+import { newKey, post } from '../../test/run-fixtures';
 
 // The Idempotency-Key of tablet writes, exercised through run routes (any tablet write would do).
-let t: TestContext;
-let clock: TestClock;
-let engineer: SignedIn;
-let operator: SignedIn;
-let operator2: SignedIn;
-let versionId: number;
-beforeAll(async () => {
-  t = await createTestContext();
-  clock = new TestClock();
-  t.ctx.clock = clock;
-  [engineer, operator, operator2] = await Promise.all([signedInUser(t.app, 'engineer'), signedInUser(t.app, 'operator'), signedInUser(t.app, 'operator')]);
-  ({ versionId } = await releasedVersion(runnableContent(await createRunRecords())));
-});
-afterAll(() => t.close());
+const lab = setUpRunLab({ runQuantity: 1 });
+const { newRun, step } = lab;
 
 const MINUTE = 60_000;
-const newRun = () => planRun(engineer, { versionId, quantity: 1 });
-const step = (runId: number, stepId: string, action: string, body: object = {}, who = operator, key?: string) => post(who, `/api/runs/${runId}/steps/${stepId}/${action}`, body, key);
 
 describe('idempotency of tablet writes', () => {
   it('when the same key is sent twice, then the write happens once and the second answer replays the first', async () => {
     const run = await newRun();
     const key = newKey();
-    const first = await step(run.id, 'plasma-1', 'start', {}, operator, key);
-    clock.advance(MINUTE);
-    const second = await step(run.id, 'plasma-1', 'start', {}, operator, key);
+    const first = await step(run.id, 'plasma-1', 'start', {}, lab.operator, key);
+    lab.clock.advance(MINUTE);
+    const second = await step(run.id, 'plasma-1', 'start', {}, lab.operator, key);
     expect(first.status).toBe(200);
     expect(second.status).toBe(200);
     expect(second.body).toEqual(first.body);
@@ -44,10 +29,10 @@ describe('idempotency of tablet writes', () => {
   });
 
   it('when the same key comes twice at once, then one write happens and both get its answer', async () => {
-    const run = await dryingRunFor();
+    const run = (await lab.dryingRun()).id;
     const key = newKey();
     const body = { stepId: 'dry-ag-1', label: 'Dry', plannedSeconds: 420 };
-    const [a, b] = await Promise.all([post(operator, `/api/runs/${run}/timers`, body, key), post(operator, `/api/runs/${run}/timers`, body, key)]);
+    const [a, b] = await Promise.all([post(lab.operator, `/api/runs/${run}/timers`, body, key), post(lab.operator, `/api/runs/${run}/timers`, body, key)]);
     expect([a.status, b.status]).toEqual([201, 201]);
     expect(a.body).toEqual(b.body);
     expect(await RunTimerModel.count({ where: { runId: run } })).toBe(1);
@@ -56,35 +41,27 @@ describe('idempotency of tablet writes', () => {
   it('when a key is reused with another body, then 422 and nothing is done; another person may use the same key', async () => {
     const run = await newRun();
     const key = newKey();
-    expect((await step(run.id, 'plasma-1', 'not-done', { reason: 'First reason' }, operator, key)).status).toBe(200);
-    const reused = await step(run.id, 'plasma-1', 'not-done', { reason: 'Second reason' }, operator, key);
+    expect((await step(run.id, 'plasma-1', 'not-done', { reason: 'First reason' }, lab.operator, key)).status).toBe(200);
+    const reused = await step(run.id, 'plasma-1', 'not-done', { reason: 'Second reason' }, lab.operator, key);
     expect(reused.status).toBe(422);
     expect(reused.body.error.message).toMatch(/already used for a different request/);
-    expect((await step(run.id, 'print-ag-1', 'acknowledge-safety', {}, operator2, key)).status).toBe(200);
+    expect((await step(run.id, 'print-ag-1', 'acknowledge-safety', {}, lab.operator2, key)).status).toBe(200);
     expect(await DeviationModel.count({ where: { runId: run.id } })).toBe(1);
   });
 
   it('when a refused write is retried with its key after the cause is fixed, then it goes through', async () => {
     const run = await newRun();
     const key = newKey();
-    expect((await step(run.id, 'print-ag-1', 'start', {}, operator, key)).status).toBe(409);
+    expect((await step(run.id, 'print-ag-1', 'start', {}, lab.operator, key)).status).toBe(409);
     await step(run.id, 'print-ag-1', 'acknowledge-safety');
-    expect((await step(run.id, 'print-ag-1', 'start', {}, operator, key)).status).toBe(200);
+    expect((await step(run.id, 'print-ag-1', 'start', {}, lab.operator, key)).status).toBe(200);
   });
 
   it('when the key is malformed, then 400 and nothing is done', async () => {
     const run = await newRun();
     for (const key of ['has space', 'x'.repeat(101), 'semi;colon']) {
-      expect((await step(run.id, 'plasma-1', 'start', {}, operator, key)).status).toBe(400);
+      expect((await step(run.id, 'plasma-1', 'start', {}, lab.operator, key)).status).toBe(400);
     }
     expect((await RunStepRecordModel.findOne({ where: { runId: run.id, stepId: 'plasma-1' } }))?.state).toBe('pending');
   });
 });
-
-async function dryingRunFor(): Promise<number> {
-  const run = await newRun();
-  await doStep(operator, run.id, 'plasma-1');
-  await doStep(operator, run.id, 'print-ag-1');
-  await startStep(operator, run.id, 'dry-ag-1');
-  return run.id;
-}

@@ -1,19 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
 import { InkInputSchema, InkPrintabilitySchema, InkSchema } from '@tracewright/shared';
 
 import { InkModel } from '../models/ink.model';
+import { setUpCatalogueLab } from '../../test/catalogue-lab';
 import { describeCatalogue, uniqueName } from '../../test/catalogue-contract';
-import { signedInUser, type SignedIn } from '../../test/fixtures';
-import { createTestContext, type TestContext } from '../../test/test-context';
 
-let t: TestContext;
-let engineer: SignedIn;
-beforeAll(async () => {
-  t = await createTestContext();
-  engineer = await signedInUser(t.app, 'engineer');
-});
-afterAll(() => t.close());
+const lab = setUpCatalogueLab();
+const { post } = lab;
 
 // Invented, plausible values: they exercise the API, not any published property.
 const inkBody = (name: string) => ({
@@ -27,7 +21,7 @@ const inkBody = (name: string) => ({
   solvents: [{ name: 'Ethanol', casNumber: '64-17-5', hazardCodes: ['H225'], pictograms: ['GHS02'], signalWord: 'Danger' }],
 });
 
-describeCatalogue(() => t, {
+describeCatalogue(() => lab.t, {
   noun: 'ink',
   path: '/api/inks',
   listKey: 'inks',
@@ -48,8 +42,6 @@ describeCatalogue(() => t, {
   ],
 });
 
-const post = (path: string, body: object) => engineer.agent.post(path).set('X-CSRF-Token', engineer.csrf).send(body);
-
 describe('ink solvents', () => {
   it('when an ink has two solvents with hazard codes, then they come back whole and in order', async () => {
     // Codes as REFERENCES §7.2 lists them (ethanol harmonised H225; ethylene glycol per ICSC 0270).
@@ -58,7 +50,7 @@ describe('ink solvents', () => {
       { name: 'Ethylene glycol', casNumber: '107-21-1', hazardCodes: ['H302', 'H373'], pictograms: ['GHS07', 'GHS08'], signalWord: 'Warning' },
     ];
     const created = await post('/api/inks', { ...inkBody(uniqueName('two solvents')), solvents });
-    expect((await engineer.agent.get(`/api/inks/${created.body.id}`)).body.solvents).toEqual(solvents);
+    expect((await lab.engineer.agent.get(`/api/inks/${created.body.id}`)).body.solvents).toEqual(solvents);
   });
 });
 
@@ -88,7 +80,7 @@ describe('GET /api/inks/:id/printability', () => {
     const gone = await post('/api/printers', printerBody(30));
     await post(`/api/printers/${gone.body.id}/archive`, {});
 
-    const res = await engineer.agent.get(`/api/inks/${ink.body.id}/printability`);
+    const res = await lab.engineer.agent.get(`/api/inks/${ink.body.id}/printability`);
     expect(res.status).toBe(200);
     const fit = InkPrintabilitySchema.parse(res.body);
     const row = (id: number) => fit.printers.find((p) => p.printerId === id);
@@ -109,9 +101,9 @@ describe('GET /api/inks/:id/printability', () => {
     const density = 1 / (0.2 / 10_490 + 0.8 / 1000);
     const known = await post('/api/inks', { ...inkBody(uniqueName('silver')), densityKgPerM3: density, solidsWtPercent: 20, solidsDensityKgPerM3: 10_490 });
     const unknown = await post('/api/inks', inkBody(uniqueName('silver, density unknown')));
-    const withDensity = (await engineer.agent.get(`/api/inks/${known.body.id}/printability`)).body;
+    const withDensity = (await lab.engineer.agent.get(`/api/inks/${known.body.id}/printability`)).body;
     expect(withDensity.solidsVolumeFraction).toBeCloseTo(0.02328, 4);
-    const without = (await engineer.agent.get(`/api/inks/${unknown.body.id}/printability`)).body;
+    const without = (await lab.engineer.agent.get(`/api/inks/${unknown.body.id}/printability`)).body;
     expect(without.solidsVolumeFraction).toBeNull();
     expect(without.solidsVolumeFractionNote).toMatch(/solids density/);
   });
@@ -120,7 +112,7 @@ describe('GET /api/inks/:id/printability', () => {
     // Written past the API on purpose: rows from before a rule existed must not break the view.
     const broken = await InkModel.create({ ...InkInputSchema.parse(inkBody(uniqueName('broken'))), surfaceTensionMilliNPerM: 0 });
     const printer = await post('/api/printers', printerBody(21));
-    const res = await engineer.agent.get(`/api/inks/${broken.id}/printability`);
+    const res = await lab.engineer.agent.get(`/api/inks/${broken.id}/printability`);
     expect(res.status).toBe(200);
     const row = InkPrintabilitySchema.parse(res.body).printers.find((p) => p.printerId === printer.body.id);
     expect(row).toMatchObject({ windows: [], problem: expect.stringMatching(/surface ?tension/i) });
@@ -129,7 +121,7 @@ describe('GET /api/inks/:id/printability', () => {
   });
 
   it('when the ink does not exist, then 404; when the id is not a number, then 400', async () => {
-    expect((await engineer.agent.get('/api/inks/2147483000/printability')).status).toBe(404);
-    expect((await engineer.agent.get('/api/inks/abc/printability')).status).toBe(400);
+    expect((await lab.engineer.agent.get('/api/inks/2147483000/printability')).status).toBe(404);
+    expect((await lab.engineer.agent.get('/api/inks/abc/printability')).status).toBe(400);
   });
 });

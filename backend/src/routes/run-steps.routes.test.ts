@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
 import { StepRecordViewSchema, TimerViewSchema } from '@tracewright/shared';
 import { StepWriteResultSchema, TimerWriteResultSchema } from '@tracewright/shared';
@@ -8,28 +8,13 @@ import { DeviationModel } from '../models/deviation.model';
 import { RunStepRecordModel } from '../models/run-step-record.model';
 import { RunTimerModel } from '../models/run-timer.model';
 import { RunModel } from '../models/run.model';
-import { signedInUser, type SignedIn } from '../../test/fixtures';
-import { createRunRecords, doStep, planRun, post, releasedVersion, runnableContent, startStep } from '../../test/run-fixtures';
-import { createTestContext, TestClock, type TestContext } from '../../test/test-context';
+import { setUpRunLab } from '../../test/run-lab';
+import { doStep, post, startStep } from '../../test/run-fixtures';
 
-let t: TestContext;
-let clock: TestClock;
-let engineer: SignedIn;
-let operator: SignedIn;
-let operator2: SignedIn;
-let versionId: number;
-beforeAll(async () => {
-  t = await createTestContext();
-  clock = new TestClock();
-  t.ctx.clock = clock;
-  [engineer, operator, operator2] = await Promise.all([signedInUser(t.app, 'engineer'), signedInUser(t.app, 'operator'), signedInUser(t.app, 'operator')]);
-  ({ versionId } = await releasedVersion(runnableContent(await createRunRecords())));
-});
-afterAll(() => t.close());
+const lab = setUpRunLab({ runQuantity: 2 });
+const { newRun, step, dryingRun } = lab;
 
 const MINUTE = 60_000;
-const newRun = () => planRun(engineer, { versionId, quantity: 2 });
-const step = (runId: number, stepId: string, action: string, body: object = {}, who = operator, key?: string) => post(who, `/api/runs/${runId}/steps/${stepId}/${action}`, body, key);
 const deviationsOf = (runId: number) => DeviationModel.findAll({ where: { runId }, order: [['id', 'ASC']] });
 const stateOf = async (runId: number) => (await RunModel.findByPk(runId))?.state;
 
@@ -39,15 +24,15 @@ describe('steps', () => {
     const started = await step(run.id, 'plasma-1', 'start');
     expect(started.status).toBe(200);
     const body = StepWriteResultSchema.parse(started.body);
-    expect(body).toMatchObject({ runId: run.id, runState: 'in-progress', deviations: [], step: { stepId: 'plasma-1', state: 'in-progress', startedBy: { id: operator.user.id } } });
+    expect(body).toMatchObject({ runId: run.id, runState: 'in-progress', deviations: [], step: { stepId: 'plasma-1', state: 'in-progress', startedBy: { id: lab.operator.user.id } } });
     expect(await stateOf(run.id)).toBe('in-progress');
     for (const id of ['plasma-1']) expect((await step(run.id, id, 'complete', { note: 'Two passes' })).status).toBe(200);
-    for (const id of ['print-ag-1', 'dry-ag-1', 'cure-ag-1']) await doStep(operator, run.id, id);
+    for (const id of ['print-ag-1', 'dry-ag-1', 'cure-ag-1']) await doStep(lab.operator, run.id, id);
     expect(await stateOf(run.id)).toBe('in-progress');
-    const last = await doStep(operator, run.id, 'inspect-1');
+    const last = await doStep(lab.operator, run.id, 'inspect-1');
     expect(last.body.runState).toBe('completed');
     const record = await RunStepRecordModel.findOne({ where: { runId: run.id, stepId: 'plasma-1' } });
-    expect(record).toMatchObject({ state: 'done', note: 'Two passes', completedBy: operator.user.id });
+    expect(record).toMatchObject({ state: 'done', note: 'Two passes', completedBy: lab.operator.user.id });
     const actions = (await AuditEventModel.findAll({ where: { entityType: 'run', entityId: String(run.id) } })).map((a) => a.action);
     expect(actions).toEqual(expect.arrayContaining(['run.started', 'run-step.started', 'run-step.completed', 'run.completed']));
   });
@@ -60,14 +45,14 @@ describe('steps', () => {
     expect(refused.body.error.details.safetyNotes.map((n: { code: string }) => n.code)).toContain('nanoparticle');
     expect((await RunStepRecordModel.findOne({ where: { runId: run.id, stepId: 'print-ag-1' } }))?.state).toBe('pending');
     const ack = StepWriteResultSchema.parse((await step(run.id, 'print-ag-1', 'acknowledge-safety')).body);
-    expect(ack.step.safetyAcknowledgedBy?.id).toBe(operator.user.id);
+    expect(ack.step.safetyAcknowledgedBy?.id).toBe(lab.operator.user.id);
     expect((await step(run.id, 'print-ag-1', 'start')).status).toBe(200);
   });
 
   it('when two tablets complete the same step at once, then exactly one completion is kept and the other gets 409 naming who and when', async () => {
     const run = await newRun();
-    await startStep(operator, run.id, 'plasma-1');
-    const [a, b] = await Promise.all([step(run.id, 'plasma-1', 'complete', { note: 'A' }, operator), step(run.id, 'plasma-1', 'complete', { note: 'B' }, operator2)]);
+    await startStep(lab.operator, run.id, 'plasma-1');
+    const [a, b] = await Promise.all([step(run.id, 'plasma-1', 'complete', { note: 'A' }, lab.operator), step(run.id, 'plasma-1', 'complete', { note: 'B' }, lab.operator2)]);
     const statuses = [a.status, b.status].sort();
     expect(statuses).toEqual([200, 409]);
     const [winner, loser] = a.status === 200 ? [a, b] : [b, a];
@@ -102,41 +87,34 @@ describe('steps', () => {
 
   it('when a print pass starts longer after the treatment than the recipe allows, then a treatment-wait-exceeded deviation opens', async () => {
     const run = await newRun();
-    await doStep(operator, run.id, 'plasma-1');
-    clock.advance(45 * MINUTE);
-    const res = await startStep(operator, run.id, 'print-ag-1');
+    await doStep(lab.operator, run.id, 'plasma-1');
+    lab.clock.advance(45 * MINUTE);
+    const res = await startStep(lab.operator, run.id, 'print-ag-1');
     expect(res.body.deviations).toEqual([expect.objectContaining({ rule: 'treatment-wait-exceeded', stepId: 'print-ag-1' })]);
     expect(res.body.deviations[0].actual).toMatch(/45 min after the treatment, 15 min late/);
   });
 
   it('when a print pass starts within the wait, then no deviation opens', async () => {
     const run = await newRun();
-    await doStep(operator, run.id, 'plasma-1');
-    clock.advance(20 * MINUTE);
-    expect((await startStep(operator, run.id, 'print-ag-1')).body.deviations).toEqual([]);
+    await doStep(lab.operator, run.id, 'plasma-1');
+    lab.clock.advance(20 * MINUTE);
+    expect((await startStep(lab.operator, run.id, 'print-ag-1')).body.deviations).toEqual([]);
   });
 });
 
 describe('timers', () => {
-  async function dryingRun() {
-    const run = await newRun();
-    await doStep(operator, run.id, 'plasma-1');
-    await doStep(operator, run.id, 'print-ag-1');
-    await startStep(operator, run.id, 'dry-ag-1');
-    return run;
-  }
-  const startTimer = (runId: number, body: object = {}) => post(operator, `/api/runs/${runId}/timers`, { stepId: 'dry-ag-1', label: 'Dry', plannedSeconds: 420, ...body });
-  const stop = (runId: number, timerId: number, body: object = {}) => post(operator, `/api/runs/${runId}/timers/${timerId}/stop`, body);
+  const startTimer = (runId: number, body: object = {}) => post(lab.operator, `/api/runs/${runId}/timers`, { stepId: 'dry-ag-1', label: 'Dry', plannedSeconds: 420, ...body });
+  const stop = (runId: number, timerId: number, body: object = {}) => post(lab.operator, `/api/runs/${runId}/timers/${timerId}/stop`, body);
 
   it('when a timer is stopped before the step’s shortest time, then a timer-ended-early deviation opens', async () => {
     const run = await dryingRun();
     const started = await startTimer(run.id);
     expect(started.status).toBe(201);
     const timer = TimerViewSchema.parse(started.body.timer);
-    expect(timer).toMatchObject({ startedAt: clock.now().toISOString(), stoppedAt: null, startedOnDeviceClock: false });
-    clock.advance(3 * MINUTE);
+    expect(timer).toMatchObject({ startedAt: lab.clock.now().toISOString(), stoppedAt: null, startedOnDeviceClock: false });
+    lab.clock.advance(3 * MINUTE);
     const stopped = TimerWriteResultSchema.parse((await stop(run.id, timer.id)).body);
-    expect(stopped.timer.stoppedAt).toBe(clock.now().toISOString());
+    expect(stopped.timer.stoppedAt).toBe(lab.clock.now().toISOString());
     expect(stopped.deviations).toEqual([expect.objectContaining({ rule: 'timer-ended-early', severity: 'minor', stepId: 'dry-ag-1' })]);
     expect(stopped.deviations[0]?.actual).toBe('Stopped after 3 min, 2 min short.');
   });
@@ -144,7 +122,7 @@ describe('timers', () => {
   it('when a timer runs past the step’s longest time, then stopping needs a reason (400), and with one a timer-over-maximum deviation opens', async () => {
     const run = await dryingRun();
     const timer = (await startTimer(run.id)).body.timer;
-    clock.advance(12 * MINUTE);
+    lab.clock.advance(12 * MINUTE);
     const refused = await stop(run.id, timer.id);
     expect(refused.status).toBe(400);
     expect(refused.body.error.details.fieldErrors.reason[0]).toMatch(/ran 12 min, past the longest time/);
@@ -162,7 +140,7 @@ describe('timers', () => {
     expect(early.status).toBe(409);
     expect(early.body.error.message).toMatch(/still running. Stop it first/);
     expect((await startTimer(run.id)).status).toBe(409);
-    clock.advance(7 * MINUTE);
+    lab.clock.advance(7 * MINUTE);
     expect((await stop(run.id, timer.id)).body.deviations).toEqual([]);
     expect((await stop(run.id, timer.id)).status).toBe(409);
     expect((await step(run.id, 'dry-ag-1', 'complete')).status).toBe(200);
@@ -171,10 +149,10 @@ describe('timers', () => {
 
   it('when a timer is started offline, then its start is the tablet’s clock, flagged, and the step shows device time', async () => {
     const run = await dryingRun();
-    const deviceTime = new Date(clock.now().getTime() - 4 * MINUTE).toISOString();
+    const deviceTime = new Date(lab.clock.now().getTime() - 4 * MINUTE).toISOString();
     const res = await startTimer(run.id, { deviceTime, madeOffline: true });
     expect(res.body.timer).toMatchObject({ startedAt: deviceTime, startedOnDeviceClock: true });
-    const detail = await operator.agent.get(`/api/runs/${run.id}`);
+    const detail = await lab.operator.agent.get(`/api/runs/${run.id}`);
     expect(detail.body.steps.find((s: { stepId: string }) => s.stepId === 'dry-ag-1').hasDeviceTime).toBe(true);
   });
 

@@ -1,19 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 
 import { SubstrateSchema, SubstrateWettingSchema } from '@tracewright/shared';
 
 import { SubstrateModel } from '../models/substrate.model';
+import { setUpCatalogueLab } from '../../test/catalogue-lab';
 import { describeCatalogue, uniqueName } from '../../test/catalogue-contract';
-import { signedInUser, type SignedIn } from '../../test/fixtures';
-import { createTestContext, type TestContext } from '../../test/test-context';
 
-let t: TestContext;
-let engineer: SignedIn;
-beforeAll(async () => {
-  t = await createTestContext();
-  engineer = await signedInUser(t.app, 'engineer');
-});
-afterAll(() => t.close());
+const lab = setUpCatalogueLab();
+const { post } = lab;
 
 // Invented, plausible values: they exercise the API, not any published property.
 const substrateBody = (name: string) => ({
@@ -25,7 +19,7 @@ const substrateBody = (name: string) => ({
   maxShortExposureSeconds: 60,
 });
 
-describeCatalogue(() => t, {
+describeCatalogue(() => lab.t, {
   noun: 'substrate',
   path: '/api/substrates',
   listKey: 'substrates',
@@ -45,8 +39,6 @@ describeCatalogue(() => t, {
     ['"yes" for the transfer-carrier flag', { isTransferCarrier: 'yes' }],
   ],
 });
-
-const post = (path: string, body: object) => engineer.agent.post(path).set('X-CSRF-Token', engineer.csrf).send(body);
 
 // Inks built from REFERENCES §2.3 liquids; viscosity and density are invented (wetting ignores them).
 const inkOf = (name: string, total: number, dispersive: number | null, polar: number | null) => ({
@@ -71,7 +63,7 @@ describe('GET /api/substrates/:id/wetting', () => {
     const archived = await post('/api/inks', inkOf('archived ink', 30, null, null));
     await post(`/api/inks/${archived.body.id}/archive`, {});
 
-    const res = await engineer.agent.get(`/api/substrates/${substrate.body.id}/wetting`);
+    const res = await lab.engineer.agent.get(`/api/substrates/${substrate.body.id}/wetting`);
     expect(res.status).toBe(200);
     const wetting = SubstrateWettingSchema.parse(res.body);
     expect(wetting.surfaceEnergy?.source).toBe('owrk-contact-angles');
@@ -88,13 +80,13 @@ describe('GET /api/substrates/:id/wetting', () => {
 
   it('when a substrate has neither parts nor contact angles, then the surface energy is null with what to record', async () => {
     const substrate = await post('/api/substrates', substrateBody(uniqueName('unmeasured')));
-    const res = await engineer.agent.get(`/api/substrates/${substrate.body.id}/wetting`);
+    const res = await lab.engineer.agent.get(`/api/substrates/${substrate.body.id}/wetting`);
     expect(res.body.surfaceEnergy).toBeNull();
     expect(res.body.surfaceEnergyNote).toMatch(/contact angles/);
     for (const row of res.body.inks) expect(row.margin).toBeNull();
   });
 
   it('when the substrate does not exist, then 404', async () => {
-    expect((await engineer.agent.get('/api/substrates/2147483000/wetting')).status).toBe(404);
+    expect((await lab.engineer.agent.get('/api/substrates/2147483000/wetting')).status).toBe(404);
   });
 });

@@ -19,8 +19,11 @@ export async function loadDeviation(id: number, transaction?: Transaction, lock 
   return row;
 }
 
-/** The deviation as the audit trail keeps it (before/after of every review change). */
-export const deviationRecord = (row: DeviationModel) => ({
+/**
+ * What was found, where, and where it stands: the part the audit record and the API's summary
+ * share. A field added here also enters the content hash that review signatures cover.
+ */
+export const deviationFacts = (row: DeviationModel) => ({
   id: row.id,
   runId: row.runId,
   stepId: row.stepId,
@@ -32,6 +35,11 @@ export const deviationRecord = (row: DeviationModel) => ({
   actual: row.actual,
   pieceIds: parseJsonColumn<number[]>(row.pieceIds, []),
   photoFileIds: parseJsonColumn<number[]>(row.photoFileIds, []),
+});
+
+/** The deviation as the audit trail keeps it (before/after of every review change). */
+export const deviationRecord = (row: DeviationModel) => ({
+  ...deviationFacts(row),
   assigneeId: row.assigneeId ?? null,
   revision: row.revision,
   closureNote: row.closureNote ?? null,

@@ -7,7 +7,7 @@ import type { RunReadingModel } from '../models/run-reading.model';
 import type { RunStepRecordModel } from '../models/run-step-record.model';
 import type { RunTimerModel } from '../models/run-timer.model';
 import type { RunModel } from '../models/run.model';
-import { parseJsonColumn } from './catalogue-dto';
+import { deviationFacts } from './deviation-record';
 import { personRef } from './recipe-dto';
 
 export type People = Map<number, string>;
@@ -80,17 +80,7 @@ export const toReadingView = (row: RunReadingModel, people: People): ReadingView
 });
 
 export const toDeviationSummary = (row: DeviationModel, people: People): DeviationSummary => ({
-  id: row.id,
-  runId: row.runId,
-  stepId: row.stepId,
-  rule: row.rule,
-  severity: row.severity,
-  state: row.state,
-  title: row.title,
-  expected: row.expected,
-  actual: row.actual,
-  pieceIds: parseJsonColumn<number[]>(row.pieceIds, []),
-  photoFileIds: parseJsonColumn<number[]>(row.photoFileIds, []),
+  ...deviationFacts(row),
   createdAt: row.createdAt.toISOString(),
   createdBy: personRef(people, row.createdBy),
 });

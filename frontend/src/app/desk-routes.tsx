@@ -7,7 +7,6 @@ import { calculatorRoutes } from '../features/calculator/calculator-routes';
 import { catalogueRoutes } from '../features/catalogue/catalogue-routes';
 import { outgoingMailLoader } from '../features/dev-mail/routes/outgoing-mail-loader';
 import { OutgoingMailPage } from '../features/dev-mail/routes/outgoing-mail-page';
-import { HomePage } from '../features/home/routes/home-page';
 import { peopleLoader } from '../features/people/routes/people-loader';
 import { PeoplePage } from '../features/people/routes/people-page';
 import { MyPinPage } from '../features/pin/routes/my-pin-page';
@@ -16,6 +15,7 @@ import { recipesRoutes } from '../features/recipes/recipes-routes';
 import { runsRoutes } from '../features/runs/runs-routes';
 import { settingsLoader } from '../features/settings/routes/settings-loader';
 import { SettingsPage } from '../features/settings/routes/settings-page';
+import { HomeRoute } from './home-route';
 import { NotFoundPage } from './not-found-page';
 import { makeGuard, page } from './route-page';
 import { ROUTE_ROLES } from './route-roles';
@@ -27,7 +27,7 @@ import { ROUTE_ROLES } from './route-roles';
 export function deskRoutes(queryClient: QueryClient): RouteObject[] {
   const guarded = makeGuard(queryClient);
   return [
-    page({ index: true, Component: HomePage }),
+    page({ index: true, Component: HomeRoute }),
     page({ path: 'my-pin', Component: MyPinPage }),
     page({ path: 'people', loader: guarded(ROUTE_ROLES.people, peopleLoader(queryClient)), Component: PeoplePage }),
     page({ path: 'settings', loader: guarded(ROUTE_ROLES.settings, settingsLoader(queryClient)), Component: SettingsPage }),

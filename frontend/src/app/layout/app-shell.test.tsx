@@ -1,10 +1,11 @@
 import { screen, within } from '@testing-library/react';
 import { http } from 'msw';
-import { describe, expect, it } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
 
 import type { Role } from '@tracewright/shared';
 
 import { apiError, signedInAs } from '../../../test/api-fixtures';
+import { homeApis } from '../../../test/home-api';
 import { server } from '../../../test/msw-server';
 import { renderApp } from '../../../test/render-app';
 
@@ -20,6 +21,9 @@ async function navLinkNames() {
 }
 
 describe('app shell', () => {
+  // Some of these land on the home page, which reads runs (and, for some roles, the quality overview).
+  beforeEach(() => server.use(...homeApis()));
+
   it('when an admin is signed in, then the navigation offers the admin pages', async () => {
     server.use(...signedInAs('admin'));
     renderApp('/');

@@ -1,8 +1,9 @@
 import { screen } from '@testing-library/react';
 import { http, HttpResponse } from 'msw';
-import { describe, expect, it } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
 
 import { apiError, LAB_SETTINGS, sessionFor } from '../../../../test/api-fixtures';
+import { homeApis } from '../../../../test/home-api';
 import { server } from '../../../../test/msw-server';
 import { renderApp } from '../../../../test/render-app';
 
@@ -14,6 +15,9 @@ function previewAnswers() {
 }
 
 describe('set-password page', () => {
+  // Some of these land on the home page, which reads runs (and, for some roles, the quality overview).
+  beforeEach(() => server.use(...homeApis()));
+
   it('when the two passwords differ, then the form refuses before anything is sent', async () => {
     previewAnswers();
     let completeCalls = 0;

@@ -2,9 +2,9 @@ import type { ReactNode } from 'react';
 import { useFormContext } from 'react-hook-form';
 
 import { FormError } from '../../../components/ui/form-error';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 import { TextField } from '../../../components/ui/text-field';
 import { FormActions } from './form-actions';
-import { TextAreaField } from './text-area-field';
 import { useFieldProps } from './use-field-props';
 
 type CalibratedFormProps = { label: string; onSubmit: () => void; saveLabel: string; isPending: boolean; cancelPath: string; children: ReactNode };

@@ -5,12 +5,12 @@ import type { z } from 'zod';
 import { InkInputSchema, type Ink, type InkInput } from '@tracewright/shared';
 
 import { FormError } from '../../../components/ui/form-error';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 import { FormActions } from './form-actions';
 import { InkFluidFields } from './ink-fluid-fields';
 import { InkIdentityFields } from './ink-identity-fields';
 import { InkProcessFields } from './ink-process-fields';
 import { SolventsEditor } from './solvents-editor';
-import { TextAreaField } from './text-area-field';
 import { useSaveForm } from './use-save-form';
 import { formValuesOf } from '../utils/record-values';
 

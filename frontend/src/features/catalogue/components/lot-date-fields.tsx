@@ -1,7 +1,7 @@
 import type { LotInput } from '@tracewright/shared';
 
+import { TextAreaField } from '../../../components/ui/text-area-field';
 import { TextField } from '../../../components/ui/text-field';
-import { TextAreaField } from './text-area-field';
 import { useFieldProps } from './use-field-props';
 
 /** Lot number and its dates; an empty optional date is sent as null, meaning "not yet" or "none". */

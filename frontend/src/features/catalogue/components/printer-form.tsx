@@ -5,11 +5,11 @@ import type { z } from 'zod';
 import { PrinterInputSchema, type Printer, type PrinterInput } from '@tracewright/shared';
 
 import { FormError } from '../../../components/ui/form-error';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 import { formValuesOf } from '../utils/record-values';
 import { ChannelsEditor } from './channels-editor';
 import { FormActions } from './form-actions';
 import { PrinterFields } from './printer-fields';
-import { TextAreaField } from './text-area-field';
 import { useSaveForm } from './use-save-form';
 
 type PrinterFormValues = z.input<typeof PrinterInputSchema>;

@@ -5,12 +5,12 @@ import type { z } from 'zod';
 import { SubstrateInputSchema, type Substrate, type SubstrateInput } from '@tracewright/shared';
 
 import { FormError } from '../../../components/ui/form-error';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 import { formValuesOf } from '../utils/record-values';
 import { FormActions } from './form-actions';
 import { SubstrateHeatFields } from './substrate-heat-fields';
 import { SubstrateIdentityFields } from './substrate-identity-fields';
 import { SubstrateSurfaceFields } from './substrate-surface-fields';
-import { TextAreaField } from './text-area-field';
 import { useSaveForm } from './use-save-form';
 
 type SubstrateFormValues = z.input<typeof SubstrateInputSchema>;

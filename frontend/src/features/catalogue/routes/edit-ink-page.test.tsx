@@ -5,7 +5,8 @@ import { describe, expect, it } from 'vitest';
 import { apiError, signedInAs } from '../../../../test/api-fixtures';
 import { server } from '../../../../test/msw-server';
 import { renderApp } from '../../../../test/render-app';
-import { anInk, catalogueLists } from '../testing/catalogue-fixtures';
+import { anInk } from '../../../../test/catalogue-records';
+import { catalogueLists } from '../testing/catalogue-fixtures';
 
 const INK = anInk({ id: 3, name: 'Argent nano A9', version: 4, viscosityMilliPaS: 11 });
 

@@ -7,7 +7,8 @@ import type { InstrumentView } from '@tracewright/shared';
 import { signedInAs } from '../../../../test/api-fixtures';
 import { server } from '../../../../test/msw-server';
 import { renderApp } from '../../../../test/render-app';
-import { aPrinter, catalogueLists } from '../testing/catalogue-fixtures';
+import { aPrinter } from '../../../../test/catalogue-records';
+import { catalogueLists } from '../testing/catalogue-fixtures';
 
 const anInstrument = (id: number, name: string, state: InstrumentView['status']['state'], due: string | null): InstrumentView => ({
   id,

@@ -7,7 +7,8 @@ import type { Role } from '@tracewright/shared';
 import { signedInAs } from '../../../../test/api-fixtures';
 import { server } from '../../../../test/msw-server';
 import { renderApp } from '../../../../test/render-app';
-import { aFit, aLot, anInk, catalogueLists } from '../testing/catalogue-fixtures';
+import { aLot, anInk } from '../../../../test/catalogue-records';
+import { aFit, catalogueLists } from '../testing/catalogue-fixtures';
 
 const INK = anInk({
   id: 5,

@@ -5,7 +5,8 @@ import { describe, expect, it } from 'vitest';
 import { signedInAs } from '../../../../test/api-fixtures';
 import { server } from '../../../../test/msw-server';
 import { renderApp } from '../../../../test/render-app';
-import { aLot, anInk, aSubstrate, catalogueLists } from '../testing/catalogue-fixtures';
+import { aLot, anInk, aSubstrate } from '../../../../test/catalogue-records';
+import { catalogueLists } from '../testing/catalogue-fixtures';
 
 const LOTS = [
   aLot({ id: 1, lotNumber: 'AN9-2609', status: { flags: ['expired', 'past-pot-life'], usable: false, messages: ['Expired on 2026-11-30.'] } }),

@@ -5,7 +5,8 @@ import { describe, expect, it } from 'vitest';
 import { signedInAs } from '../../../../test/api-fixtures';
 import { server } from '../../../../test/msw-server';
 import { renderApp } from '../../../../test/render-app';
-import { aSubstrate, catalogueLists } from '../testing/catalogue-fixtures';
+import { aSubstrate } from '../../../../test/catalogue-records';
+import { catalogueLists } from '../testing/catalogue-fixtures';
 
 describe('new substrate form', () => {
   it('when contact angles are typed, then their surface energy shows at once and the body carries the angles, parts left null', async () => {

@@ -5,7 +5,8 @@ import { describe, expect, it } from 'vitest';
 import { apiError, signedInAs } from '../../../../test/api-fixtures';
 import { server } from '../../../../test/msw-server';
 import { renderApp } from '../../../../test/render-app';
-import { anInk, aPrinter, catalogueLists } from '../testing/catalogue-fixtures';
+import { anInk, aPrinter } from '../../../../test/catalogue-records';
+import { catalogueLists } from '../testing/catalogue-fixtures';
 
 const INKS = [anInk({ id: 1, name: 'Argent nano A9' }), anInk({ id: 2, name: 'Dielectric cover D1' }), anInk({ id: 3, name: 'Retired ink', archived: true })];
 const PRINTER = aPrinter({ id: 6, name: 'Bench jetter', version: 3, channels: [{ name: 'A', inkId: 1 }] });

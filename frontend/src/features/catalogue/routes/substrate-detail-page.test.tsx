@@ -7,7 +7,8 @@ import type { SubstrateWetting } from '@tracewright/shared';
 import { signedInAs } from '../../../../test/api-fixtures';
 import { server } from '../../../../test/msw-server';
 import { renderApp } from '../../../../test/render-app';
-import { aSubstrate, catalogueLists } from '../testing/catalogue-fixtures';
+import { aSubstrate } from '../../../../test/catalogue-records';
+import { catalogueLists } from '../testing/catalogue-fixtures';
 
 const SUBSTRATE = aSubstrate({ id: 4, name: 'Stretch TPU 50', waterContactAngleDeg: 72.5, diiodomethaneContactAngleDeg: 27 });
 const WETTING: SubstrateWetting = {

@@ -1,8 +1,9 @@
 import { screen, within } from '@testing-library/react';
 import { http, HttpResponse } from 'msw';
-import { describe, expect, it } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
 
 import { apiError, LAB_SETTINGS, sessionFor } from '../../../../test/api-fixtures';
+import { homeApis } from '../../../../test/home-api';
 import { server } from '../../../../test/msw-server';
 import { renderApp } from '../../../../test/render-app';
 
@@ -14,6 +15,9 @@ const ROSTER = {
 };
 
 describe('PIN switch page', () => {
+  // Some of these land on the home page, which reads runs (and, for some roles, the quality overview).
+  beforeEach(() => server.use(...homeApis()));
+
   it('when the tablet is not trusted (401), then it explains that someone must sign in with a password once', async () => {
     server.use(http.get('/api/auth/pin-users', () => apiError(401, 'UNAUTHENTICATED', 'Not a trusted device.')));
     const { router } = renderApp('/pin');

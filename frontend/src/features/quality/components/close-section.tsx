@@ -9,7 +9,7 @@ import { useCloseDeviation } from '../api/close-deviation';
 import { SIGN_MEANINGS } from '../utils/signature-meanings';
 import { DetailSection } from './detail-section';
 import { SignatureDialog } from '../../../components/signatures/signature-dialog';
-import { TextAreaField } from './text-area-field';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 
 /** Closing is the last signature: the corrective action was checked and works. */
 export function CloseSection({ deviation }: { deviation: DeviationDetail }) {

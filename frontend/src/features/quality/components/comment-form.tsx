@@ -5,11 +5,11 @@ import { CommentInputSchema } from '@tracewright/shared';
 
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 import { useToast } from '../../../components/ui/use-toast';
 import { applyApiErrorToForm } from '../../../lib/form-errors';
 import { useAddComment } from '../api/add-comment';
 import { DetailSection } from './detail-section';
-import { TextAreaField } from './text-area-field';
 
 /** A note for the record; it joins the history with the writer's name and the time. */
 export function CommentForm({ deviationId }: { deviationId: number }) {

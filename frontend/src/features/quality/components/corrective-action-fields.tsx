@@ -1,11 +1,11 @@
 import { useQuery } from '@tanstack/react-query';
 import type { FieldErrors, UseFormRegister } from 'react-hook-form';
 
+import { TextAreaField } from '../../../components/ui/text-area-field';
 import { TextField } from '../../../components/ui/text-field';
 import { peopleQueryOptions } from '../api/get-people';
 import type { DispositionFormValues } from '../utils/disposition-form-schema';
 import { OptionSelect } from './option-select';
-import { TextAreaField } from './text-area-field';
 
 type CorrectiveActionFieldsProps = { register: UseFormRegister<DispositionFormValues>; errors: FieldErrors<DispositionFormValues>['correctiveAction'] };
 

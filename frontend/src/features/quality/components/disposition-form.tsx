@@ -6,6 +6,7 @@ import type { DeviationDetail } from '@tracewright/shared';
 
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 import type { ApiError } from '../../../lib/api-error';
 import { applyApiErrorToForm } from '../../../lib/form-errors';
 import { DispositionFormSchema, EMPTY_DISPOSITION_FORM, type DispositionFormOutput, type DispositionFormValues } from '../utils/disposition-form-schema';
@@ -16,7 +17,6 @@ import { DispositionChoice } from './disposition-choice';
 import { DispositionSignDialog } from './disposition-sign-dialog';
 import { PiecePicker } from './piece-picker';
 import { ReworkStepPicker } from './rework-step-picker';
-import { TextAreaField } from './text-area-field';
 
 const SERVER_FIELDS = ['disposition', 'rationale', 'pieceIds', 'reworkStepIds'] as const;
 
@@ -48,7 +48,7 @@ export function DispositionForm({ deviation }: { deviation: DeviationDetail }) {
         <DispositionChoice registration={register('disposition')} error={errors.disposition?.message} />
         <PiecePicker deviation={deviation} registration={register('pieceIds')} error={errors.pieceIds?.message} />
         {watch('disposition') === 'rework' ? <ReworkStepPicker runId={deviation.run.id} registration={register('reworkStepIds')} error={errors.reworkStepIds?.message} /> : null}
-        <TextAreaField label="Rationale" help="Why this decision is right for these pieces; at least 10 characters." error={errors.rationale?.message} {...register('rationale')} />
+        <TextAreaField label="Rationale" rows={4} help="Why this decision is right for these pieces; at least 10 characters." error={errors.rationale?.message} {...register('rationale')} />
         <ChoiceBox type="checkbox" {...register('hasCorrectiveAction')}>
           Add a corrective action
         </ChoiceBox>

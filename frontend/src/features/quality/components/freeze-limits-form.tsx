@@ -6,13 +6,13 @@ import { FreezeLimitsInputSchema, type Trend } from '@tracewright/shared';
 
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 import { useToast } from '../../../components/ui/use-toast';
 import { applyApiErrorToForm } from '../../../lib/form-errors';
 import { useFreezeLimits } from '../api/freeze-limits';
 import { ChoiceBox } from './choice-box';
 import { ChoiceFieldset } from './choice-fieldset';
 import { DetailSection } from './detail-section';
-import { TextAreaField } from './text-area-field';
 
 // Ticks hold text; the request takes the shared FreezeLimitsInput (run ids as numbers).
 const FreezeFormSchema = z.object({

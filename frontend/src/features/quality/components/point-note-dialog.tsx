@@ -9,8 +9,8 @@ import { applyApiErrorToForm } from '../../../lib/form-errors';
 import { useNoteTrendPoint } from '../api/note-trend-point';
 import { valueText } from '../utils/trend-text';
 import { ModalDialog } from '../../../components/ui/modal-dialog';
-import { TextAreaField } from './text-area-field';
 import { DialogActions } from '../../../components/ui/dialog-actions';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 
 export type PointNoteMode = 'exclude' | 'include' | 'annotate';
 type Point = Trend['points'][number];

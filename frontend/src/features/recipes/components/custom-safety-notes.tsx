@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import { Controller } from 'react-hook-form';
 
+import { TextAreaField } from '../../../components/ui/text-area-field';
 import { fieldError, type StepFormApi } from '../utils/step-form-types';
-import { TextAreaField } from './text-area-field';
 
 const toNotes = (text: string) =>
   text

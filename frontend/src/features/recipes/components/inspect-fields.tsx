@@ -1,6 +1,6 @@
+import { TextAreaField } from '../../../components/ui/text-area-field';
 import { fieldError } from '../utils/step-form-types';
 import type { KindFieldsProps } from './step-fields-context';
-import { TextAreaField } from './text-area-field';
 
 export function InspectFields({ form }: KindFieldsProps) {
   return (

@@ -1,8 +1,8 @@
 import { useId } from 'react';
 
+import { TextAreaField } from '../../../components/ui/text-area-field';
 import { fieldError, type StepFormApi } from '../utils/step-form-types';
 import { MarkdownLiteView } from './markdown-lite-view';
-import { TextAreaField } from './text-area-field';
 
 /** What the operator reads at the bench, with a preview of how it will look. */
 export function InstructionsField({ form }: { form: StepFormApi }) {

@@ -5,11 +5,11 @@ import { RecipeInputSchema, type RecipeDetail } from '@tracewright/shared';
 
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 import { TextField } from '../../../components/ui/text-field';
 import { isApiError } from '../../../lib/api-error';
 import { applyApiErrorToForm } from '../../../lib/form-errors';
 import { useCreateRecipe } from '../api/create-recipe';
-import { TextAreaField } from './text-area-field';
 
 const EMPTY = { code: '', name: '', product: '', notes: '' };
 

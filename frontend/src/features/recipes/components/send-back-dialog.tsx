@@ -7,8 +7,8 @@ import { FormError } from '../../../components/ui/form-error';
 import { applyApiErrorToForm } from '../../../lib/form-errors';
 import { useSendBackVersion } from '../api/send-back-version';
 import { ModalDialog } from '../../../components/ui/modal-dialog';
-import { TextAreaField } from './text-area-field';
 import { DialogActions } from '../../../components/ui/dialog-actions';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 
 type SendBackDialogProps = { view: RecipeVersionView; onSentBack: () => void; onClose: () => void };
 

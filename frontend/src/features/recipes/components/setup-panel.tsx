@@ -1,13 +1,13 @@
 import type { VersionSetup } from '@tracewright/shared';
 
 import { SelectField } from '../../../components/ui/select-field';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 import type { ProcessRecords } from '../api/get-process-records';
 import type { SetupChange } from '../utils/draft-reducer';
 import { describeHeatSource, recordOptions } from '../utils/record-options';
 import { TREATMENT_METHOD_LABELS } from '../utils/step-labels';
 import { ChannelPlanFields } from './channel-plan-fields';
 import { RecordChecklist } from './record-checklist';
-import { TextAreaField } from './text-area-field';
 
 type SetupPanelProps = { setup: VersionSetup; records: ProcessRecords; isEditable: boolean; onChange: (change: SetupChange) => void };
 

@@ -1,58 +1,35 @@
 import type { DraftContent, RecipeStep, RecipeDetail, RecipeVersionView, VersionSummary } from '@tracewright/shared';
 
+import { aDraftContent, BLANK_STEP_FIELDS } from '../../../../test/draft-content';
+
 // Invented demo recipe for the builder's tests: a silver trace printed on PET and cured in an oven.
 
 export const PRINT_STEP: RecipeStep = {
+  ...BLANK_STEP_FIELDS,
   id: 'print-silver',
   kind: 'print-pass',
   title: 'Print silver traces',
-  instructions: '',
-  minMinutes: null,
-  maxMinutes: null,
-  handsOnMinutes: null,
-  readingSpecs: [],
-  safetyNotes: [],
   params: { inkId: 1, channel: 'C1', artworkFileId: null, dpi: 1000, passes: 1, platenTempC: null, nozzleCheckRequired: true, printedAreaFraction: null, pieceAreaMm2: null },
 };
 
 export const CURE_STEP: RecipeStep = {
+  ...BLANK_STEP_FIELDS,
   id: 'cure-silver',
   kind: 'cure',
   title: 'Cure silver',
-  instructions: '',
-  minMinutes: null,
-  maxMinutes: null,
-  handsOnMinutes: null,
-  readingSpecs: [],
-  safetyNotes: [],
   params: { heatSourceId: 1, temperatureC: 120, minutes: 30, rampCPerMinute: null },
 };
 
 export const INSPECT_STEP: RecipeStep = {
+  ...BLANK_STEP_FIELDS,
   id: 'inspect-traces',
   kind: 'inspect',
   title: 'Look over the traces',
-  instructions: '',
-  minMinutes: null,
-  maxMinutes: null,
-  handsOnMinutes: null,
-  readingSpecs: [],
-  safetyNotes: [],
   params: { lookFor: 'Breaks and bridges', measure: '' },
 };
 
 export function aContent(overrides: Partial<DraftContent> = {}): DraftContent {
-  return {
-    substrateId: 1,
-    receivingSubstrateId: null,
-    printerId: 1,
-    channelPlan: [{ channel: 'C1', inkId: 1 }],
-    heatSourceIds: [1],
-    treaterIds: [],
-    changeNote: '',
-    steps: [PRINT_STEP, CURE_STEP, INSPECT_STEP],
-    ...overrides,
-  };
+  return aDraftContent([PRINT_STEP, CURE_STEP, INSPECT_STEP], overrides);
 }
 
 export const ENGINEER = { id: 1, name: 'Robin Vale' };

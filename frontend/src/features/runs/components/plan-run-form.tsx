@@ -9,6 +9,7 @@ import type { RecipeVersionView } from '@tracewright/shared';
 import { Button } from '../../../components/ui/button';
 import { buttonClasses } from '../../../components/ui/button-styles';
 import { FormError } from '../../../components/ui/form-error';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 import { useToast } from '../../../components/ui/use-toast';
 import { usePlanRun } from '../api/plan-run';
 import { placePlanError } from '../utils/plan-api-errors';
@@ -20,7 +21,6 @@ import { InstrumentChoices } from './instrument-choices';
 import { PlanBasicsFields } from './plan-basics-fields';
 import { PlanLotsFieldset } from './plan-lots-fieldset';
 import { PlanMachinesFieldset } from './plan-machines-fieldset';
-import { TextAreaField } from './text-area-field';
 
 type PlanRunFormProps = { version: RecipeVersionView; sources: PlanSources; clock: PlanClock };
 

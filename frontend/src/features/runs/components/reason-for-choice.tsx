@@ -4,7 +4,7 @@ import type { ChoiceIssue, ChoiceIssueRule } from '@tracewright/shared';
 
 import type { IconName } from '../../../components/icons/icon-paths';
 import { StatusBadge } from '../../../components/ui/status-badge';
-import { TextAreaField } from './text-area-field';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 
 const ISSUE_LOOK: Record<ChoiceIssueRule, { label: string; icon: IconName }> = {
   'expired-lot': { label: 'Expired', icon: 'blocked' },

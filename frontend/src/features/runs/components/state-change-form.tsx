@@ -5,12 +5,12 @@ import { RunStateChangeSchema } from '@tracewright/shared';
 
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
+import { TextAreaField } from '../../../components/ui/text-area-field';
 import { useToast } from '../../../components/ui/use-toast';
 import { applyApiErrorToForm } from '../../../lib/form-errors';
 import { useChangeRunState } from '../api/change-run-state';
 import { ACTION_WORDS } from '../utils/run-action-words';
 import type { RunAction } from '../utils/run-actions';
-import { TextAreaField } from './text-area-field';
 
 type StateChangeFormProps = { runId: number; runCode: string; action: RunAction; onClose: () => void };
 

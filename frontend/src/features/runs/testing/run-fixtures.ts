@@ -1,13 +1,12 @@
 import type { DraftContent, ReadingView, RecipeStep, RecipeStepOf, RunDetail, RunSummary } from '@tracewright/shared';
 
+import { aDraftContent, BLANK_STEP_FIELDS } from '../../../../test/draft-content';
 import { aHeatSource, anInk } from './catalogue-records';
 
 // An invented run of a silver trace label: print on PET, cure in an oven, measure the trace.
 
-const COMMON = { instructions: '', minMinutes: null, maxMinutes: null, handsOnMinutes: null, readingSpecs: [], safetyNotes: [] };
-
 export const PRINT_STEP: RecipeStepOf<'print-pass'> = {
-  ...COMMON,
+  ...BLANK_STEP_FIELDS,
   id: 'print-silver',
   kind: 'print-pass',
   title: 'Print silver traces',
@@ -15,7 +14,7 @@ export const PRINT_STEP: RecipeStepOf<'print-pass'> = {
 };
 
 export const CURE_STEP: RecipeStep = {
-  ...COMMON,
+  ...BLANK_STEP_FIELDS,
   id: 'cure-silver',
   kind: 'cure',
   title: 'Cure silver',
@@ -26,7 +25,7 @@ export const CURE_STEP: RecipeStep = {
 };
 
 export const INSPECT_STEP: RecipeStep = {
-  ...COMMON,
+  ...BLANK_STEP_FIELDS,
   id: 'inspect-trace',
   kind: 'inspect',
   title: 'Measure the heater trace',
@@ -37,17 +36,7 @@ export const INSPECT_STEP: RecipeStep = {
 };
 
 export function aContent(overrides: Partial<DraftContent> = {}): DraftContent {
-  return {
-    substrateId: 1,
-    receivingSubstrateId: null,
-    printerId: 1,
-    channelPlan: [{ channel: 'C1', inkId: 1 }],
-    heatSourceIds: [1],
-    treaterIds: [],
-    changeNote: '',
-    steps: [PRINT_STEP, CURE_STEP, INSPECT_STEP],
-    ...overrides,
-  };
+  return aDraftContent([PRINT_STEP, CURE_STEP, INSPECT_STEP], overrides);
 }
 
 export const ROBIN = { id: 1, name: 'Robin Vale' };

@@ -1,13 +1,13 @@
 import type { ComponentProps } from 'react';
 
-import { FieldMessage } from '../../../components/ui/field-message';
-import { fieldClasses } from '../../../components/ui/field-styles';
-import { useFieldIds } from '../../../components/ui/use-field-ids';
+import { FieldMessage } from './field-message';
+import { fieldClasses } from './field-styles';
+import { useFieldIds } from './use-field-ids';
 
 type TextAreaFieldProps = ComponentProps<'textarea'> & { label: string; help?: string; error?: string };
 
-/** Label above, the text box, then help and problem under it, like every field here. */
-export function TextAreaField({ label, help, error, id: givenId, className = '', rows = 4, ...rest }: TextAreaFieldProps) {
+/** A multi-line field laid out like TextField: label above, help and problem under; className sizes the whole field. */
+export function TextAreaField({ label, help, error, id: givenId, rows = 3, className = '', ...rest }: TextAreaFieldProps) {
   const { id, helpId, errorId, describedBy } = useFieldIds(Boolean(help), Boolean(error), givenId);
   return (
     <div className={`flex flex-col gap-1 ${className}`}>
