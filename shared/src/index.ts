@@ -31,3 +31,4 @@ export * from './rules/quality';
 export * from './schemas/quality-views.schema';
 export * from './schemas/audit-search.schema';
 export * from './rules/permissions';
+export * from './rules/state-words';

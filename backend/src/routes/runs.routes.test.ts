@@ -162,7 +162,7 @@ describe('holding, resuming and cancelling', () => {
     expect((await post(engineer, `/api/runs/${run.id}/cancel`, { reason: 'Customer withdrew the order' })).body.state).toBe('cancelled');
     const final = await post(engineer, `/api/runs/${run.id}/resume`, { reason: 'Oops' });
     expect(final.status).toBe(409);
-    expect(final.body.error.message).toMatch(/cancelled is final/);
+    expect(final.body.error.message).toMatch(/A cancelled run cannot move on/);
     expect((await post(operator, `/api/runs/${run.id}/steps/plasma-1/complete`)).status).toBe(409);
     const actions = (await AuditEventModel.findAll({ where: { entityType: 'run', entityId: String(run.id) }, order: [['id', 'ASC']] })).map((a) => a.action);
     expect(actions).toEqual(expect.arrayContaining(['run.planned', 'run.held', 'run.resumed', 'run.cancelled']));

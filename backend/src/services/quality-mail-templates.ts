@@ -1,4 +1,4 @@
-import type { DeviationSummary } from '@tracewright/shared';
+import { stateInWords, type DeviationSummary } from '@tracewright/shared';
 
 import type { OutgoingMail } from './mail.service';
 
@@ -53,7 +53,7 @@ export function deviationDigestMail(args: {
   link: string;
 }): OutgoingMail {
   const counts = (record: Record<string, number>) => Object.entries(record).map(([k, n]) => `${n} ${k}`).join(', ');
-  const shown = args.lines.map((l) => `- #${l.id} [${l.severity}, ${l.state}, ${Math.floor(l.ageDays)} d] ${l.title} (run ${l.runCode})`);
+  const shown = args.lines.map((l) => `- #${l.id} [${l.severity}, ${stateInWords(l.state)}, ${Math.floor(l.ageDays)} d] ${l.title} (run ${l.runCode})`);
   const more = args.total - args.lines.length;
   return {
     to: args.to,

@@ -1,6 +1,6 @@
 import type { Transaction } from 'sequelize';
 
-import { versionDiff, type SaveDraftInput } from '@tracewright/shared';
+import { stateInWords, versionDiff, type SaveDraftInput } from '@tracewright/shared';
 import type { NewVersionInput, RecipeVersionView, VersionDiffView } from '@tracewright/shared';
 
 import type { AppContext } from '../app-context';
@@ -61,7 +61,7 @@ export async function startNewVersion(ctx: AppContext, actor: UserModel, recipeI
     const versions = await RecipeVersionModel.findAll({ where: { recipeId }, order: [['number', 'DESC']], transaction });
     const open = versions.find((v) => v.state === 'draft' || v.state === 'in-review');
     if (open) {
-      throw conflict(`${recipe.code} already has version ${open.number} open (${open.state}). Finish or release it before starting another.`, { openVersionId: open.id });
+      throw conflict(`${recipe.code} already has version ${open.number} open (${stateInWords(open.state)}). Finish or release it before starting another.`, { openVersionId: open.id });
     }
     const source = await copySource(versions, input.fromVersionId ?? null, recipe.code);
     const content = { ...versionContent(source), changeNote: '' };

@@ -1,7 +1,7 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 
 import { checkSummary, deviationDraft, equipmentChoiceIssues, lotChoiceIssues, missingReasons, pieceCodes, recipeChecks, runCode } from '@tracewright/shared';
-import { substitutedContent, type VersionMachineKind } from '@tracewright/shared';
+import { stateInWords, substitutedContent, type VersionMachineKind } from '@tracewright/shared';
 import type { ChoiceIssue, DeviationDraft, DraftContent, PlanRunInput, RunDetail } from '@tracewright/shared';
 
 import type { AppContext } from '../app-context';
@@ -91,7 +91,7 @@ export async function planRun(ctx: AppContext, actor: UserModel, input: PlanRunI
     const recipe = await RecipeModel.findByPk(version.recipeId, { transaction });
     if (!recipe) throw notFound('Recipe', version.recipeId);
     const label = `${recipe.code} version ${version.number}`;
-    if (version.state !== 'released') throw fieldProblem('versionId', `${label} is ${version.state}; only released versions can be run.`);
+    if (version.state !== 'released') throw fieldProblem('versionId', `${label} is ${stateInWords(version.state)}; only released versions can be run.`);
     const content = versionContent(version);
     const lots = await resolveLots(content, input, label, transaction);
     const machines = await resolveEquipment(content, input, transaction);

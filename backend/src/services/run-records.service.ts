@@ -1,6 +1,6 @@
 import type { z } from 'zod';
 
-import { cureLogDose, deviationDraft, type DeviationSummary } from '@tracewright/shared';
+import { cureLogDose, deviationDraft, stateInWords, type DeviationSummary } from '@tracewright/shared';
 import type { ConfirmLotInputSchema, CureLogInputSchema, NozzleCheckInputSchema } from '@tracewright/shared';
 import type { CureLogView, CureLogWriteResult, StepWriteResult } from '@tracewright/shared';
 
@@ -74,7 +74,7 @@ export function recordNozzleCheck(ctx: AppContext, write: TabletWrite, runId: nu
     const at = stepAt(scope.content, scope.run, input.stepId);
     if (at.step.kind !== 'print-pass') throw fieldProblem('stepId', `Nozzle checks belong to print passes; step ${at.ref.number} “${at.ref.title}” is a ${at.step.kind} step.`);
     const record = await lockStepRecord(scope, at.step.id);
-    if (record.state === 'done' || record.state === 'not-done') throw conflict(`Step ${at.ref.number} “${at.ref.title}” is already ${record.state}; a nozzle check belongs before or during the print.`, { state: record.state });
+    if (record.state === 'done' || record.state === 'not-done') throw conflict(`Step ${at.ref.number} “${at.ref.title}” is already ${stateInWords(record.state)}; a nozzle check belongs before or during the print.`, { state: record.state });
     if (input.photoFileId !== null && !(await StoredFileModel.findByPk(input.photoFileId, { transaction: scope.transaction, attributes: ['id'] }))) {
       throw fieldProblem('photoFileId', `There is no photo with id ${input.photoFileId}. Take the photo again.`);
     }

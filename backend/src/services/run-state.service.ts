@@ -1,4 +1,4 @@
-import { allowedRunTransitions, canTransition, type RunDetail, type RunState } from '@tracewright/shared';
+import { allowedRunTransitions, canTransition, stateInWords, type RunDetail, type RunState } from '@tracewright/shared';
 
 import type { AppContext } from '../app-context';
 import { conflict } from '../errors/app-error';
@@ -26,8 +26,8 @@ export async function changeRunState(ctx: AppContext, actor: UserModel, id: numb
     const run = await loadRun(id, transaction, true);
     if (!canTransition(run.state, move.to)) {
       const options = allowedRunTransitions(run.state);
-      const next = options.length > 0 ? `From ${run.state} it can go to ${options.join(' or ')}.` : `${run.state} is final.`;
-      throw conflict(`Run ${run.code} is ${run.state}, so it cannot be ${move.doing}. ${next}`, { state: run.state, allowed: options });
+      const next = options.length > 0 ? `From ${stateInWords(run.state)} it can go to ${options.map(stateInWords).join(' or ')}.` : `A ${stateInWords(run.state)} run cannot move on.`;
+      throw conflict(`Run ${run.code} is ${stateInWords(run.state)}, so it cannot be ${move.doing}. ${next}`, { state: run.state, allowed: options });
     }
     const before = runRecord(run);
     await run.update({ state: move.to, version: run.version + 1, holdReason: action === 'hold' ? reason : null }, { transaction });

@@ -1,6 +1,6 @@
 import type { z } from 'zod';
 
-import { deviationDraft, formatNumber, timerOutcome, type DeviationSummary } from '@tracewright/shared';
+import { deviationDraft, formatNumber, stateInWords, timerOutcome, type DeviationSummary } from '@tracewright/shared';
 import type { StartTimerInputSchema, StopTimerInputSchema } from '@tracewright/shared';
 import type { TimerWriteResult } from '@tracewright/shared';
 
@@ -30,7 +30,7 @@ export function startTimer(ctx: AppContext, write: TabletWrite, runId: number, i
   return runWrite(ctx, write, runId, 201, async (scope) => {
     const at = stepAt(scope.content, scope.run, input.stepId);
     const record = await lockStepRecord(scope, input.stepId);
-    if (record.state !== 'in-progress') throw conflict(`Start ${name(at)} before its timer (it is ${record.state}).`, { state: record.state });
+    if (record.state !== 'in-progress') throw conflict(`Start ${name(at)} before its timer (it is ${stateInWords(record.state)}).`, { state: record.state });
     const running = await RunTimerModel.findOne({ where: { runId: scope.run.id, stepId: input.stepId, stoppedAt: null }, transaction: scope.transaction });
     if (running) throw conflict(`The timer “${running.label}” of ${name(at)} is already running since ${running.startedAt.toISOString()}.`, { timerId: running.id });
     const time = stampedTime(ctx, input);

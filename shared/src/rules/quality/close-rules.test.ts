@@ -19,7 +19,7 @@ describe('closeBlockers', () => {
 
   it('when the rework run is in progress, then the blocker names it', () => {
     expect(closeBlockers({ ...base, reworkRuns: [{ code: 'R-2026-0011', state: 'in-progress' }] })[0]?.message).toBe(
-      'Rework run R-2026-0011 is in-progress; close the deviation once the rework is completed.',
+      'Rework run R-2026-0011 is in progress; close the deviation once the rework is completed.',
     );
   });
 });

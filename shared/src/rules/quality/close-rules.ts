@@ -1,4 +1,5 @@
 import type { RunState } from '../../schemas/run.schema';
+import { stateInWords } from '../state-words';
 
 /** A reason closing is refused: with a field it is the form's to fix (422), without it the record's state (409). */
 export interface CloseBlocker {
@@ -32,7 +33,7 @@ export function closeBlockers(context: CloseContext): CloseBlocker[] {
   }
   for (const run of context.reworkRuns) {
     if (REWORK_DONE.includes(run.state)) continue;
-    blockers.push({ message: `Rework run ${run.code} is ${run.state}; close the deviation once the rework is completed.` });
+    blockers.push({ message: `Rework run ${run.code} is ${stateInWords(run.state)}; close the deviation once the rework is completed.` });
   }
   return blockers;
 }

@@ -24,6 +24,6 @@ describe('runSignOffCheck', () => {
   it('when two deviations are undecided, then the refusal names both with their states', () => {
     const check = runSignOffCheck({ code: 'R-2026-0007', state: 'completed' }, [deviation(3, 'open'), deviation(4, 'closed'), deviation(5, 'in-review')]);
     expect(check.undecided.map((d) => d.id)).toEqual([3, 5]);
-    expect(check.refusal).toBe('Run R-2026-0007 cannot be signed off: 2 deviations have no disposition yet (#3 “Deviation 3” is open; #5 “Deviation 5” is in-review).');
+    expect(check.refusal).toBe('Run R-2026-0007 cannot be signed off: 2 deviations have no disposition yet (#3 “Deviation 3” is open; #5 “Deviation 5” is in review).');
   });
 });

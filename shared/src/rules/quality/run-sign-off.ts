@@ -1,4 +1,5 @@
 import type { RunState } from '../../schemas/run.schema';
+import { stateInWords } from '../state-words';
 import type { DeviationState } from './deviation-transitions';
 
 /** A deviation counts as decided for sign-off once it has a disposition (closing may come later). */
@@ -24,10 +25,10 @@ export function runSignOffCheck(
   const undecided = deviations.filter((d) => !DECIDED_DEVIATION_STATES.includes(d.state)).map(({ id, title, state }) => ({ id, title, state }));
   if (run.state === 'closed') return { canSignOff: false, refusal: `Run ${run.code} is already signed off.`, undecided };
   if (run.state !== 'completed') {
-    return { canSignOff: false, refusal: `Run ${run.code} is ${run.state}; only a completed run can be signed off.`, undecided };
+    return { canSignOff: false, refusal: `Run ${run.code} is ${stateInWords(run.state)}; only a completed run can be signed off.`, undecided };
   }
   if (undecided.length === 0) return { canSignOff: true, refusal: null, undecided };
   const count = undecided.length === 1 ? '1 deviation has' : `${undecided.length} deviations have`;
-  const list = undecided.map((d) => `#${d.id} “${d.title}” is ${d.state}`).join('; ');
+  const list = undecided.map((d) => `#${d.id} “${d.title}” is ${stateInWords(d.state)}`).join('; ');
   return { canSignOff: false, refusal: `Run ${run.code} cannot be signed off: ${count} no disposition yet (${list}).`, undecided };
 }

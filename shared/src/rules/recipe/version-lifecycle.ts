@@ -1,4 +1,5 @@
 import type { VersionState } from '../../schemas/recipe.schema';
+import { stateInWords } from '../state-words';
 
 /** What can happen to a recipe version, and the state it must be in for that. */
 export const VERSION_MOVES = {
@@ -16,7 +17,7 @@ export type VersionMove = keyof typeof VERSION_MOVES;
 export function versionMoveRefusal(state: VersionState, move: VersionMove, versionNumber: number): string | null {
   const { from, doing } = VERSION_MOVES[move];
   if (state === from) return null;
-  const now = state === 'in-review' ? 'is already in review' : `is ${state}`;
+  const now = state === 'in-review' ? 'is already in review' : `is ${stateInWords(state)}`;
   return `Version ${versionNumber} ${now}, so it cannot be ${doing}. Reload to see where it stands.`;
 }
 

@@ -31,7 +31,7 @@ export {
   type StepRecordState,
 } from './run-progress';
 export { stepParameterTexts, stepTimeText, type TravellerContext } from './step-parameters';
-export type { StepRef } from './text-format';
+export { numberText, quantityText, type StepRef } from './text-format';
 export { timerElapsedSeconds, timerOutcome, timerRemainingSeconds, type RunTimer, type TimerOutcome } from './timer-rules';
 export { travellerSteps, type TravellerReading, type TravellerStep } from './traveller';
 export { treatmentWaitExceeded, type StepCompletion, type TreatmentWait } from './treatment-wait';

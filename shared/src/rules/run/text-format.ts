@@ -1,4 +1,4 @@
-// Small wording helpers the run rules share (not part of the public surface).
+// Small wording helpers the run rules share; numberText and quantityText are public, for screens too.
 
 /**
  * A number as a person entered or would read it: up to 6 significant figures, so float noise

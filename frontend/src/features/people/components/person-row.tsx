@@ -16,8 +16,17 @@ export function PersonRow({ user, isSelf }: { user: User; isSelf: boolean }) {
         {isSelf ? <span className="ml-2 font-normal text-graphite-600">(you)</span> : null}
       </th>
       <td className={CELL}>
-        {/* Long addresses may wrap after the @, never in the middle of a name. */}
-        {user.email.split('@').map((part, i) => (i === 0 ? part : <span key={i}>@<wbr />{part}</span>))}
+        {/* Long addresses may wrap after the @, never inside a name or at a domain's hyphen. */}
+        {user.email.split('@').map((part, i) => (
+          <span key={i}>
+            {i === 0 ? null : (
+              <>
+                @<wbr />
+              </>
+            )}
+            <span className="whitespace-nowrap">{part}</span>
+          </span>
+        ))}
       </td>
       <td className={`${CELL} min-w-52`}>
         <RoleSelect user={user} disabled={isSelf} />

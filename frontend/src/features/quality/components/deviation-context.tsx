@@ -1,4 +1,4 @@
-import type { DeviationDetail } from '@tracewright/shared';
+import { stateInWords, type DeviationDetail } from '@tracewright/shared';
 
 import { StepKindLabel } from '../../../components/step-glyphs/step-kind-label';
 import { TextLink } from '../../../components/ui/text-link';
@@ -12,7 +12,7 @@ export function DeviationContext({ deviation }: { deviation: DeviationDetail }) 
       <dl className="grid grid-cols-[auto_1fr] gap-x-6 gap-y-2">
         <dt className="font-bold">Run</dt>
         <dd>
-          <TextLink to={`/runs/${run.id}`}>{run.code}</TextLink> ({run.state})
+          <TextLink to={`/runs/${run.id}`}>{run.code}</TextLink> ({stateInWords(run.state)})
         </dd>
         <dt className="font-bold">Recipe</dt>
         <dd>

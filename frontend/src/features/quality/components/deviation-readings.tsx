@@ -1,4 +1,4 @@
-import type { DeviationDetail } from '@tracewright/shared';
+import { numberText, type DeviationDetail } from '@tracewright/shared';
 
 import { StatusBadge } from '../../../components/ui/status-badge';
 import { formatDateTime } from '../../../lib/format-date';
@@ -28,7 +28,7 @@ export function DeviationReadings({ readings }: { readings: DeviationDetail['rea
                 {r.specName}
               </th>
               <td className={`${CELL} text-right tabular`}>
-                <span className="text-lg font-bold">{r.value}</span> <span className="text-graphite-600">{r.unit}</span>
+                <span className="text-lg font-bold">{numberText(r.value)}</span> <span className="text-graphite-600">{r.unit}</span>
               </td>
               <td className={CELL}>{r.outOfLimits ? <StatusBadge tone="blocked" label="Out of limits" /> : <StatusBadge tone="pass" label="Within limits" />}</td>
               <td className={`${CELL} tabular`}>{formatDateTime(r.recordedAt)}</td>

@@ -42,6 +42,18 @@ describe('deviation detail', () => {
     expect(screen.queryByLabelText('Comment')).not.toBeInTheDocument();
   });
 
+  it('when a reading was corrected to 20 °C and the run is still going, then the value reads without float noise and the run state in words', async () => {
+    const deviation = aDeviation();
+    const corrected = { ...deviation.readings[0]!, value: 12.543554007123 };
+    server.use(...signedInAs('engineer'), ...pickerLists(), deviationApi(aDeviation({ readings: [corrected], run: { ...deviation.run, state: 'in-progress' } })));
+    renderApp('/deviations/31');
+
+    const readings = within(await screen.findByRole('region', { name: 'Readings' }));
+    expect(readings.getByText('12.5436')).toBeInTheDocument();
+    expect(screen.queryByText(/12\.54355/)).not.toBeInTheDocument();
+    expect(screen.getByText('(in progress)')).toBeInTheDocument();
+  });
+
   it('when quality closes a dispositioned deviation, then it is signed with the verification note, password and hash', async () => {
     const bodies: unknown[] = [];
     server.use(

@@ -1,7 +1,7 @@
 import type { ReadingEvaluation } from '@tracewright/shared';
+import { numberText } from '@tracewright/shared';
 
 import { Icon } from '../../../components/icons/icon';
-import { figureText } from '../utils/figure-text';
 
 /** The live verdict under a reading: the corrected value (large) and in or out of limits, in words. */
 export function EvaluationLine({ evaluation, unit }: { evaluation: ReadingEvaluation; unit: string }) {
@@ -11,7 +11,7 @@ export function EvaluationLine({ evaluation, unit }: { evaluation: ReadingEvalua
       {evaluation.correctedValue !== null ? (
         <p className="flex items-baseline gap-2">
           <span className="text-base font-bold">At {evaluation.correctedTo} °C:</span>
-          <span className="text-[2.25rem] font-bold leading-tight tabular">{figureText(evaluation.correctedValue)}</span>
+          <span className="text-[2.25rem] font-bold leading-tight tabular">{numberText(evaluation.correctedValue)}</span>
           <span className="text-[1.25rem]">{unit}</span>
         </p>
       ) : null}

@@ -1,12 +1,12 @@
 import { useState } from 'react';
 
 import type { ReadingSpec } from '@tracewright/shared';
+import { numberText } from '@tracewright/shared';
 
 import { Icon } from '../../../components/icons/icon';
 import { formatDateTime } from '../../../lib/format-date';
 import { useBench } from '../hooks/bench-context';
 import type { BenchReading } from '../utils/bench-run';
-import { figureText } from '../utils/figure-text';
 import { benchButton } from './bench-button-styles';
 import { CorrectReadingDialog } from './correct-reading-dialog';
 
@@ -17,7 +17,7 @@ export function ReadingRow({ reading, spec, tcrPerK }: ReadingRowProps) {
   const { isWorkable } = useBench();
   const [isCorrecting, setIsCorrecting] = useState(false);
   const isReplaced = reading.supersededById !== null;
-  const value = `${figureText(reading.value)} ${reading.unit || spec.unit}`;
+  const value = `${numberText(reading.value)} ${reading.unit || spec.unit}`;
   return (
     <li className="flex flex-wrap items-center gap-3 py-2">
       {isReplaced ? (
@@ -28,7 +28,7 @@ export function ReadingRow({ reading, spec, tcrPerK }: ReadingRowProps) {
       ) : (
         <span className="text-[1.75rem] font-bold tabular">{value}</span>
       )}
-      {reading.correctedValue !== null ? <span className="tabular">= {figureText(reading.correctedValue)} {reading.unit || spec.unit} at 20 °C</span> : null}
+      {reading.correctedValue !== null ? <span className="tabular">= {numberText(reading.correctedValue)} {reading.unit || spec.unit} at 20 °C</span> : null}
       {!isReplaced ? (
         <span className={`inline-flex items-center gap-1 font-bold ${reading.outOfLimits ? 'text-oxide-700' : 'text-verdigris-800'}`}>
           <Icon name={reading.outOfLimits ? 'warning' : 'check'} className="size-5" />

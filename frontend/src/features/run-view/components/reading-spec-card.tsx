@@ -1,7 +1,7 @@
 import { readingLimitsText, type ReadingSpec } from '@tracewright/shared';
+import { numberText } from '@tracewright/shared';
 
 import { useBench } from '../hooks/bench-context';
-import { figureText } from '../utils/figure-text';
 import { ReadingTarget } from './reading-target';
 
 type ReadingSpecCardProps = { stepId: string; spec: ReadingSpec; tcrPerK: number | null; canRecord: boolean };
@@ -21,7 +21,7 @@ export function ReadingSpecCard({ stepId, spec, tcrPerK, canRecord }: ReadingSpe
         {spec.target !== null ? (
           <>
             {' '}
-            · target <span className="font-bold tabular">{figureText(spec.target)} {spec.unit}</span>
+            · target <span className="font-bold tabular">{numberText(spec.target)} {spec.unit}</span>
           </>
         ) : null}
         {spec.required ? ' · required' : ' · optional'}

@@ -1,6 +1,5 @@
 import type { RecipeStep, RunDetail } from '@tracewright/shared';
-
-import { figureText as n } from './figure-text';
+import { numberText as n } from '@tracewright/shared';
 
 export type BenchFigure = { label: string; value: string; unit: string };
 export type BenchFact = { label: string; text: string };

@@ -1,9 +1,9 @@
 import { readingLimitsText, type RecipeStep, type RunDetail } from '@tracewright/shared';
+import { quantityText } from '@tracewright/shared';
 
 import { StatusBadge } from '../../../components/ui/status-badge';
 import { formatDateTime } from '../../../lib/format-date';
 import type { ReadingRow } from '../utils/reading-rows';
-import { readingText } from '../utils/reading-text';
 import { ReadingValue } from './reading-value';
 
 const HEAD = 'border-b border-graphite-900 bg-graphite-100 px-2 py-1 text-left font-bold print:bg-transparent';
@@ -41,7 +41,7 @@ export function RecordReadingsTable({ caption, step, rows, run }: RecordReadings
               <td className={CELL}>
                 <ReadingValue row={row} />
               </td>
-              <td className={`${CELL} tabular whitespace-nowrap`}>{current.correctedValue === null ? '—' : readingText(current.correctedValue, current.unit)}</td>
+              <td className={`${CELL} tabular whitespace-nowrap`}>{current.correctedValue === null ? '—' : quantityText(current.correctedValue, current.unit)}</td>
               <td className={`${CELL} tabular whitespace-nowrap`}>{spec ? readingLimitsText(spec) : '—'}</td>
               <td className={`${CELL} whitespace-nowrap`}>
                 {current.outOfLimits ? <StatusBadge tone="blocked" label="Out of limits" /> : <StatusBadge tone="pass" label="In limits" />}

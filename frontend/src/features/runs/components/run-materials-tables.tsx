@@ -9,7 +9,7 @@ const FLAG_WORDS: Record<string, string> = { expired: 'Expired', 'past-pot-life'
 export function RunMaterialsTables({ run }: { run: RunDetail }) {
   return (
     <div className="grid gap-6 md:grid-cols-2 print:grid-cols-2">
-      <table className="w-full border-collapse text-sm">
+      <table className="w-full self-start border-collapse text-sm">
         <caption className="mb-1 text-left text-lg font-bold">Lots</caption>
         <thead>
           <tr>
@@ -31,7 +31,7 @@ export function RunMaterialsTables({ run }: { run: RunDetail }) {
           ))}
         </tbody>
       </table>
-      <table className="w-full border-collapse text-sm">
+      <table className="w-full self-start border-collapse text-sm">
         <caption className="mb-1 text-left text-lg font-bold">Machines</caption>
         <thead>
           <tr>

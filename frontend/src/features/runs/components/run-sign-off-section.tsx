@@ -1,7 +1,7 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 
-import type { RunDetail } from '@tracewright/shared';
+import { stateInWords, type RunDetail } from '@tracewright/shared';
 
 import { SignatureDialog } from '../../../components/signatures/signature-dialog';
 import { SignatureManifest } from '../../../components/signatures/signature-manifest';
@@ -48,7 +48,7 @@ export function RunSignOffSection({ run }: { run: RunDetail }) {
             <ul aria-label="Deviations without a disposition" className="list-disc pl-6">
               {view.undecided.map((d) => (
                 <li key={d.id}>
-                  <TextLink to={`/deviations/${d.id}`}>{`#${d.id} ${d.title}`}</TextLink> ({d.state})
+                  <TextLink to={`/deviations/${d.id}`}>{`#${d.id} ${d.title}`}</TextLink> ({stateInWords(d.state)})
                 </li>
               ))}
             </ul>

@@ -2,6 +2,7 @@ import { http, HttpResponse } from 'msw';
 
 import type { HeatSourceView, Ink, InstrumentView, LotView, Printer, RunDetail, RunSignOffView, Substrate, SurfaceTreaterView } from '@tracewright/shared';
 import type { RecipeSummary, RecipeVersionView } from '@tracewright/shared';
+import { stateInWords } from '@tracewright/shared';
 
 import { aHeatSource, aLot, anInk, anInstrument, aPrinter, aSubstrate } from './catalogue-records';
 import { aReleasedRecipe, aReleasedVersion } from './plan-records';
@@ -16,7 +17,7 @@ export function aSignOffView(run: RunDetail, overrides: Partial<RunSignOffView> 
     runState: run.state,
     contentHash: 'c0ffee'.padEnd(64, '0'),
     canSignOff: isCompleted,
-    refusal: isCompleted ? null : `Run ${run.code} is ${run.state}; only a completed run can be signed off.`,
+    refusal: isCompleted ? null : `Run ${run.code} is ${stateInWords(run.state)}; only a completed run can be signed off.`,
     undecided: [],
     signature: null,
     ...overrides,
