@@ -45,13 +45,16 @@ function solventNote(solvent: Solvent): SafetyNote | null {
 
 const note = (code: string, text: string): SafetyNote => ({ code, text, severity: 'caution' });
 
+// What a person reads says how sure a figure is in plain words; the source markers stay here.
 const NOTES = {
-  hotSurface: (t: number) => note('hot-surface', `Hot surface at ${f(t)} °C: skin burns on contact from about 51 °C held for a minute, and faster the hotter it is (ISO 13732-1 thresholds, values from memory); wear heat-resistant gloves and let parts cool before handling.`),
+  // Burn thresholds after ISO 13732-1 (≈51 °C for a 1-minute contact): values from memory, not yet checked against the standard.
+  hotSurface: (t: number) => note('hot-surface', `Hot surface at ${f(t)} °C: skin burns on contact from about 51 °C held for a minute, and faster the hotter it is (approximate thresholds after ISO 13732-1; the standard has the exact ones); wear heat-resistant gloves and let parts cool before handling.`),
   hotPlaten: (t: number) => note('hot-platen', `Hot platen at ${f(t)} °C: a brief touch burns; keep hands clear of the platens, use heat-resistant gloves, and lay parts down to cool after peeling.`),
   pinch: note('pinch-crush', 'Pinch and crush: keep fingers out from between the platens while the press closes and opens.'),
   solderFume: note('solder-fume', 'Solder fume: flux smoke irritates the airways; solder under fume extraction and keep your face out of the plume.'),
   hotIron: (t: number | null) => note('hot-iron', `Hot iron${t === null ? '' : ` at ${f(t)} °C`}: park it in its stand between joints and never touch the tip or barrel.`),
-  nanoparticle: (name: string) => note('nanoparticle', `Nanoparticle ink (${name}): wear nitrile gloves, keep it off skin, and wipe spills up wet rather than letting them dry to dust (common practice, no source).`),
+  // Common practice, no source.
+  nanoparticle: (name: string) => note('nanoparticle', `Nanoparticle ink (${name}): wear nitrile gloves, keep it off skin, and wipe spills up wet rather than letting them dry to dust; the ink's safety data sheet says more.`),
   ventilation: note('ventilation', 'Ventilate: work where extraction draws the vapour away from you, and keep solvent containers closed between uses.'),
   noIgnition: note('no-ignition', 'Flammable vapour: keep hot plates, heat guns and sparks away until the solvent has evaporated.'),
   sds: note('sds', 'These notes come from our records: defer to the safety data sheet of each solvent and ink, and to local rules, wherever they say more.'),

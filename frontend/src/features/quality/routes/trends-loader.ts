@@ -3,16 +3,18 @@ import type { LoaderFunctionArgs } from 'react-router';
 
 import { trendSpecsQueryOptions } from '../api/get-trend-specs';
 import { trendQueryOptions } from '../api/get-trend';
-import { trendChoiceOf } from '../utils/trend-search';
+import { listedChoice, trendChoiceOf } from '../utils/trend-search';
 
-/** The spec list always; the chosen trend too, when the address names one. */
+/** The spec list always; the chosen trend too, when the address names one the list has. */
 export const trendsLoader =
   (queryClient: QueryClient) =>
   async ({ request }: LoaderFunctionArgs) => {
-    const choice = trendChoiceOf(new URL(request.url).searchParams);
-    await Promise.all([
-      queryClient.ensureQueryData(trendSpecsQueryOptions()),
-      choice ? queryClient.ensureQueryData(trendQueryOptions(choice.recipeId, choice.specId)) : null,
-    ]);
+    const asked = trendChoiceOf(new URL(request.url).searchParams);
+    const trend = asked ? queryClient.ensureQueryData(trendQueryOptions(asked.recipeId, asked.specId)) : null;
+    // Asked for together; a spec the list does not have is not waited for (the page says so), and
+    // its refusal is not left unhandled.
+    trend?.catch(() => undefined);
+    const specs = await queryClient.ensureQueryData(trendSpecsQueryOptions());
+    if (listedChoice(asked, specs)) await trend;
     return null;
   };

@@ -47,6 +47,19 @@ describe('trends page', () => {
     expect(screen.getByText(/2 of 3 points beyond 2σ on one side/)).toHaveTextContent('Point 11 (R-2026-0043, P-03)');
   });
 
+  it('when the address names a spec the list does not have, then the page says so and offers the list, without asking for its trend', async () => {
+    const asked: URLSearchParams[] = [];
+    server.use(...signedInAs('quality'), ...trendsApi(aTrend(), asked));
+    renderApp('/trends?recipeId=12&specId=gone-01');
+
+    expect(await screen.findByText('That reading spec has no trend here.')).toBeInTheDocument();
+    expect(screen.getByLabelText('Reading spec')).toBeInTheDocument();
+    expect(screen.queryByRole('heading', { name: /Trace resistance/ })).not.toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'Print' })).not.toBeInTheDocument();
+    // The loader asks early, before the list is in; the page never asks again or shows the answer.
+    expect(asked.length).toBeLessThanOrEqual(1);
+  });
+
   it('when the spec has only an upper limit, then Cp and Pp read "—" and enough points drop "provisional"', async () => {
     const oneSided = aTrend({
       spec: { id: 'trace-r-01', name: 'Trace resistance', unit: 'Ω', target: null, lowerLimit: null, upperLimit: 12 },

@@ -12,7 +12,7 @@ import { SpecPicker } from '../components/spec-picker';
 import { TrendPrintStyles } from '../components/trend-print-styles';
 import { TrendView } from '../components/trend-view';
 import { canWriteQuality } from '../utils/quality-roles';
-import { trendChoiceOf, type TrendChoice } from '../utils/trend-search';
+import { listedChoice, trendChoiceOf, type TrendChoice } from '../utils/trend-search';
 
 function ChosenTrend({ choice }: { choice: NonNullable<TrendChoice> }) {
   const { data } = useSuspenseQuery(trendQueryOptions(choice.recipeId, choice.specId));
@@ -22,8 +22,9 @@ function ChosenTrend({ choice }: { choice: NonNullable<TrendChoice> }) {
 
 export function TrendsPage() {
   const [search] = useSearchParams();
-  const choice = trendChoiceOf(search);
+  const asked = trendChoiceOf(search);
   const { data: specs } = useSuspenseQuery(trendSpecsQueryOptions());
+  const choice = listedChoice(asked, specs);
 
   return (
     <div data-print-root>
@@ -43,6 +44,10 @@ export function TrendsPage() {
       <SpecPicker specs={specs} choice={choice} />
       {choice ? (
         <ChosenTrend choice={choice} />
+      ) : asked ? (
+        <Notice tone="warning" title="That reading spec has no trend here.">
+          <p>The address names a spec with no readings yet, or one that is gone (renamed in a later version, or a mistyped address). Choose one from the list.</p>
+        </Notice>
       ) : (
         <Notice title={specs.length ? 'Choose a reading spec to see its trend.' : 'No reading has been recorded against a spec yet.'} />
       )}

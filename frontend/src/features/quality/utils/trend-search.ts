@@ -12,3 +12,11 @@ export function trendSearchFor(choice: TrendChoice): string {
   if (!choice) return '';
   return `?${new URLSearchParams({ recipeId: String(choice.recipeId), specId: choice.specId }).toString()}`;
 }
+
+/**
+ * The address's choice when the spec list (specs with readings) has it; a bookmark of a spec that
+ * is gone or has no readings is treated as no choice, so the page offers the list.
+ */
+export function listedChoice(choice: TrendChoice, specs: ReadonlyArray<{ recipeId: number; specId: string }>): TrendChoice {
+  return choice && specs.some((s) => s.recipeId === choice.recipeId && s.specId === choice.specId) ? choice : null;
+}
