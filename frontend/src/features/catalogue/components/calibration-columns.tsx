@@ -11,7 +11,7 @@ const URGENCY = { overdue: 0, 'due-soon': 1, ok: 2, 'not-tracked': 3 } as const;
 /** The two calibration columns every calibrated kind of equipment shows. */
 export function calibrationColumns<T extends Calibrated>(): Column<T>[] {
   return [
-    { key: 'due', label: 'Calibration due', sortValue: (r) => r.calibrationDueOn, render: (r) => <span className="tabular">{r.calibrationDueOn ?? '—'}</span> },
+    { key: 'due', label: 'Calibration due', sortValue: (r) => r.calibrationDueOn, render: (r) => <span className="tabular whitespace-nowrap">{r.calibrationDueOn ?? '—'}</span> },
     { key: 'calibration', label: 'Calibration', sortValue: (r) => URGENCY[r.status.state], render: (r) => <CalibrationBadge state={r.status.state} /> },
   ];
 }

@@ -2,7 +2,7 @@ import type { ReactNode } from 'react';
 
 export type DetailItem = { label: string; value: ReactNode; unit?: string };
 
-/** Label and value pairs; numbers in tabular figures with the unit lighter beside them. */
+/** Label and value pairs; numbers in tabular figures with the unit lighter beside them (degrees of angle sit on the number). */
 export function DetailList({ items }: { items: readonly DetailItem[] }) {
   return (
     <dl className="grid grid-cols-1 gap-x-8 gap-y-3 sm:grid-cols-[max-content_1fr]">
@@ -11,7 +11,7 @@ export function DetailList({ items }: { items: readonly DetailItem[] }) {
           <dt className="font-bold text-graphite-700">{item.label}</dt>
           <dd className="tabular mb-2 sm:mb-0">
             {item.value}
-            {item.unit && item.value !== '—' ? <span className="text-graphite-600"> {item.unit}</span> : null}
+            {item.unit && item.value !== '—' ? <span className="text-graphite-600">{item.unit === '°' ? '°' : ` ${item.unit}`}</span> : null}
           </dd>
         </div>
       ))}

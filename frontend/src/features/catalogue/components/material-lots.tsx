@@ -41,9 +41,9 @@ export function MaterialLots({ materialType, materialId, materialName }: Materia
                       {lot.lotNumber}
                     </Link>
                   </th>
-                  <td className={CELL}>{lot.receivedOn}</td>
-                  <td className={CELL}>{lot.openedOn ?? '—'}</td>
-                  <td className={CELL}>{lot.expiresOn ?? '—'}</td>
+                  <td className={`${CELL} tabular whitespace-nowrap`}>{lot.receivedOn}</td>
+                  <td className={`${CELL} tabular whitespace-nowrap`}>{lot.openedOn ?? '—'}</td>
+                  <td className={`${CELL} tabular whitespace-nowrap`}>{lot.expiresOn ?? '—'}</td>
                   <td className={CELL}>
                     <LotFlags status={lot.status} />
                   </td>

@@ -11,9 +11,9 @@ const NAME: Column<LotView> = { key: 'lotNumber', label: 'Lot number', sortValue
 const COLUMNS: Column<LotView>[] = [
   { key: 'material', label: 'Material', sortValue: (l) => l.materialName, render: (l) => l.materialName },
   { key: 'kind', label: 'Kind', sortValue: (l) => KIND_WORDS[l.materialType], render: (l) => KIND_WORDS[l.materialType] },
-  { key: 'received', label: 'Received', sortValue: (l) => l.receivedOn, render: (l) => <span className="tabular">{l.receivedOn}</span> },
-  { key: 'opened', label: 'Opened', sortValue: (l) => l.openedOn, render: (l) => <span className="tabular">{l.openedOn ?? '—'}</span> },
-  { key: 'expires', label: 'Expires', sortValue: (l) => l.expiresOn, render: (l) => <span className="tabular">{l.expiresOn ?? '—'}</span> },
+  { key: 'received', label: 'Received', sortValue: (l) => l.receivedOn, render: (l) => <span className="tabular whitespace-nowrap">{l.receivedOn}</span> },
+  { key: 'opened', label: 'Opened', sortValue: (l) => l.openedOn, render: (l) => <span className="tabular whitespace-nowrap">{l.openedOn ?? '—'}</span> },
+  { key: 'expires', label: 'Expires', sortValue: (l) => l.expiresOn, render: (l) => <span className="tabular whitespace-nowrap">{l.expiresOn ?? '—'}</span> },
   // Flagged lots first when sorted ascending: they need someone's attention.
   { key: 'flags', label: 'Flags', sortValue: (l) => -l.status.flags.length, render: (l) => <LotFlags status={l.status} /> },
 ];

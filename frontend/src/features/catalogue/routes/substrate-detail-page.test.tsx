@@ -47,6 +47,14 @@ describe('substrate page', () => {
     expect(within(rowOf('Unknown ink')).getByText('Unknown')).toBeInTheDocument();
   });
 
+  it('when opened, then angles read with the degree sign on the number and other units apart', async () => {
+    substratePage();
+
+    const properties = within(await screen.findByRole('region', { name: 'Properties' }));
+    expect(properties.getByText('Water contact angle').nextElementSibling).toHaveTextContent(/^72\.5°$/);
+    expect(properties.getByText('Thickness').nextElementSibling).toHaveTextContent(/^50 µm$/);
+  });
+
   it('when new angles are typed in the check panel, then the surface energy follows them at once', async () => {
     const { user } = substratePage();
 

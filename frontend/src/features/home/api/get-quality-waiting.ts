@@ -9,5 +9,6 @@ import { homeKeys } from './home-keys';
 export const qualityWaitingQueryOptions = () =>
   queryOptions({
     queryKey: homeKeys.quality(),
+    staleTime: 0,
     queryFn: async ({ signal }) => QualityDashboardSchema.parse(await apiClient.get('/api/quality/dashboard', { signal })),
   });

@@ -11,5 +11,6 @@ export const HOME_RUNS_SHOWN = 5;
 export const runsInStateQueryOptions = (state: RunState) =>
   queryOptions({
     queryKey: homeKeys.runs(state),
+    staleTime: 0,
     queryFn: async ({ signal }) => RunListSchema.parse(await apiClient.get('/api/runs', { query: { state, page: 1, pageSize: HOME_RUNS_SHOWN }, signal })),
   });

@@ -48,7 +48,7 @@ export function RunMaterialsTables({ run }: { run: RunDetail }) {
                 {item.reason ? <span className="block font-normal">Reason: {item.reason}</span> : null}
               </th>
               <td className={CELL}>{KIND_WORDS[item.kind]}</td>
-              <td className={`${CELL} tabular`}>{item.calibrationDueOn ?? '—'}</td>
+              <td className={`${CELL} tabular whitespace-nowrap`}>{item.calibrationDueOn ?? '—'}</td>
             </tr>
           ))}
         </tbody>
