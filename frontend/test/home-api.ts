@@ -2,28 +2,7 @@ import { http, HttpResponse } from 'msw';
 
 import type { QualityDashboard, RunState, RunSummary } from '@tracewright/shared';
 
-// Invented records for the home page's tests only; never used as check values.
-export function aRunSummary(overrides: Partial<RunSummary> = {}): RunSummary {
-  return {
-    id: 7,
-    code: 'R-2026-0007',
-    state: 'in-progress',
-    recipeId: 3,
-    recipeCode: 'GRID-9',
-    recipeName: 'Heater grid on TPU',
-    versionId: 30,
-    versionNumber: 2,
-    quantity: 4,
-    dueOn: null,
-    doneSteps: 3,
-    totalSteps: 8,
-    openDeviations: 0,
-    createdAt: '2026-12-01T08:00:00Z',
-    createdBy: { id: 1, name: 'Robin Vale' },
-    ...overrides,
-  };
-}
-
+// Invented figures for tests only; never used as check values.
 export const quietDashboard = (overrides: Partial<QualityDashboard> = {}): QualityDashboard => ({
   openBySeverity: {},
   openByAge: { underDay: 0, underWeek: 0, older: 0 },

@@ -176,7 +176,10 @@ describe('cure logs, lot confirmations and nozzle checks', () => {
     const check = (body: object) => post(operator, `/api/runs/${run.id}/nozzle-checks`, { stepId: 'print-ag-1', ...body });
     expect((await check({ passed: false })).body.step.nozzleCheck).toMatchObject({ passed: false, photoFileId: null });
     expect((await check({ passed: true })).body.step.nozzleCheck).toMatchObject({ passed: true });
-    expect((await check({ passed: true, stepId: 'cure-ag-1' })).status).toBe(422);
+    const atCure = await check({ passed: true, stepId: 'cure-ag-1' });
+    expect(atCure.status).toBe(422);
+    // The step's kind in words, as the recipe builder names it.
+    expect(atCure.body.error.details.fieldErrors.stepId).toEqual([expect.stringMatching(/is of kind Cure\.$/)]);
     expect((await check({ passed: true, photoFileId: 99_999_999 })).status).toBe(422);
     expect((await check({})).status).toBe(400);
   });

@@ -1,6 +1,6 @@
 import type { z } from 'zod';
 
-import { cureLogDose, deviationDraft, stateInWords, type DeviationSummary } from '@tracewright/shared';
+import { cureLogDose, deviationDraft, stateInWords, STEP_KIND_LABELS, type DeviationSummary } from '@tracewright/shared';
 import type { ConfirmLotInputSchema, CureLogInputSchema, NozzleCheckInputSchema } from '@tracewright/shared';
 import type { CureLogView, CureLogWriteResult, StepWriteResult } from '@tracewright/shared';
 
@@ -28,7 +28,7 @@ type CureLogInput = z.infer<typeof CureLogInputSchema>;
 export function recordCureLog(ctx: AppContext, write: TabletWrite, runId: number, input: CureLogInput): Promise<WriteResult<CureLogWriteResult>> {
   return runWrite(ctx, write, runId, 201, async (scope) => {
     const at = stepAt(scope.content, scope.run, input.stepId);
-    if (at.step.kind !== 'cure') throw fieldProblem('stepId', `Cure logs belong to cure steps; step ${at.ref.number} “${at.ref.title}” is a ${at.step.kind} step.`);
+    if (at.step.kind !== 'cure') throw fieldProblem('stepId', `Cure logs belong to cure steps; step ${at.ref.number} “${at.ref.title}” is of kind ${STEP_KIND_LABELS[at.step.kind]}.`);
     const { inks } = await loadReferences(scope.content, scope.transaction);
     const doses = inksCuredAt(scope.content, at.index, inks).map((ink) => ({ inkId: ink.id, inkName: ink.name, ...cureLogDose(input.samples, ink), ink }));
     const time = stampedTime(ctx, input);
@@ -72,7 +72,7 @@ export function confirmLot(ctx: AppContext, write: TabletWrite, runId: number, i
 export function recordNozzleCheck(ctx: AppContext, write: TabletWrite, runId: number, input: z.infer<typeof NozzleCheckInputSchema>): Promise<WriteResult<StepWriteResult>> {
   return runWrite(ctx, write, runId, 201, async (scope) => {
     const at = stepAt(scope.content, scope.run, input.stepId);
-    if (at.step.kind !== 'print-pass') throw fieldProblem('stepId', `Nozzle checks belong to print passes; step ${at.ref.number} “${at.ref.title}” is a ${at.step.kind} step.`);
+    if (at.step.kind !== 'print-pass') throw fieldProblem('stepId', `Nozzle checks belong to print passes; step ${at.ref.number} “${at.ref.title}” is of kind ${STEP_KIND_LABELS[at.step.kind]}.`);
     const record = await lockStepRecord(scope, at.step.id);
     if (record.state === 'done' || record.state === 'not-done') throw conflict(`Step ${at.ref.number} “${at.ref.title}” is already ${stateInWords(record.state)}; a nozzle check belongs before or during the print.`, { state: record.state });
     if (input.photoFileId !== null && !(await StoredFileModel.findByPk(input.photoFileId, { transaction: scope.transaction, attributes: ['id'] }))) {

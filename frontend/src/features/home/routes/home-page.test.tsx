@@ -5,7 +5,11 @@ import { describe, expect, it } from 'vitest';
 import { apiError, signedInAs } from '../../../../test/api-fixtures';
 import { server } from '../../../../test/msw-server';
 import { renderApp } from '../../../../test/render-app';
-import { aRunSummary, homeApis, quietDashboard } from '../../../../test/home-api';
+import { homeApis, quietDashboard } from '../../../../test/home-api';
+import { aRunSummary } from '../../../../test/run-summary';
+
+// Two runs in progress of an invented 8-step recipe.
+const IN_PROGRESS = { state: 'in-progress', recipeCode: 'GRID-9', recipeName: 'Heater grid on TPU', totalSteps: 8 } as const;
 
 describe('home page', () => {
   it('when an operator signs in, then the runs in progress are listed with their progress and the tablet is explained', async () => {
@@ -14,7 +18,7 @@ describe('home page', () => {
       ...signedInAs('operator'),
       ...homeApis(
         {
-          'in-progress': { runs: [aRunSummary(), aRunSummary({ id: 9, code: 'R-2026-0009', doneSteps: 0, openDeviations: 2 })], total: 2 },
+          'in-progress': { runs: [aRunSummary({ ...IN_PROGRESS, id: 7, code: 'R-2026-0007', doneSteps: 3 }), aRunSummary({ ...IN_PROGRESS, id: 9, code: 'R-2026-0009', doneSteps: 0, openDeviations: 2 })], total: 2 },
           'on-hold': { runs: [aRunSummary({ id: 5, state: 'on-hold' })], total: 1 },
         },
         quietDashboard(),

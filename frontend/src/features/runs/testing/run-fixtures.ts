@@ -1,6 +1,7 @@
-import type { DraftContent, ReadingView, RecipeStep, RecipeStepOf, RunDetail, RunSummary } from '@tracewright/shared';
+import type { DraftContent, ReadingView, RecipeStep, RecipeStepOf, RunDetail } from '@tracewright/shared';
 
 import { aDraftContent, BLANK_STEP_FIELDS } from '../../../../test/draft-content';
+import { aRunSummary, ROBIN } from '../../../../test/run-summary';
 import { aHeatSource, anInk } from './catalogue-records';
 
 // An invented run of a silver trace label: print on PET, cure in an oven, measure the trace.
@@ -39,29 +40,9 @@ export function aContent(overrides: Partial<DraftContent> = {}): DraftContent {
   return aDraftContent([PRINT_STEP, CURE_STEP, INSPECT_STEP], overrides);
 }
 
-export const ROBIN = { id: 1, name: 'Robin Vale' };
+// The runs list's record lives in test/ (the home page's tests use it too).
+export { aRunSummary, ROBIN };
 export const MIKA = { id: 2, name: 'Mika Sato' };
-
-export function aRunSummary(overrides: Partial<RunSummary> = {}): RunSummary {
-  return {
-    id: 42,
-    code: 'R-2026-0042',
-    state: 'planned',
-    recipeId: 3,
-    recipeCode: 'TRACE-1',
-    recipeName: 'Silver trace label',
-    versionId: 11,
-    versionNumber: 2,
-    quantity: 2,
-    dueOn: '2026-12-10',
-    doneSteps: 0,
-    totalSteps: 3,
-    openDeviations: 0,
-    createdAt: '2026-12-02T09:10:00Z',
-    createdBy: ROBIN,
-    ...overrides,
-  };
-}
 
 export function aReading(overrides: Partial<ReadingView> = {}): ReadingView {
   return {
