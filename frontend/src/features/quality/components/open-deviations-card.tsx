@@ -14,10 +14,10 @@ const AGES = [
   { key: 'older', label: 'A week or older' },
 ] as const;
 
-/** Open deviations counted by severity (each a link to the queue) and by age. */
+/** Deviations not yet closed (open, in review or dispositioned), counted by severity (each a link to the queue) and by age. */
 export function OpenDeviationsCard({ dashboard }: { dashboard: QualityDashboard }) {
   return (
-    <DashboardCard title="Open deviations">
+    <DashboardCard title="Deviations not yet closed">
       <ul className="flex flex-col gap-2">
         {[...DEVIATION_SEVERITIES].reverse().map((severity) => (
           <li key={severity}>

@@ -12,7 +12,7 @@ export function OverviewLinkCard() {
       <Icon name="ledger" className="size-8 text-copper-700" />
       <span className="flex-1">
         <span className="block text-lg font-bold underline underline-offset-4">Quality overview</span>
-        <span className="block text-graphite-700">Open deviations by severity and age, runs awaiting sign-off, versions awaiting review, weak capability.</span>
+        <span className="block text-graphite-700">Deviations not yet closed by severity and age, runs awaiting sign-off, versions awaiting review, weak capability.</span>
       </span>
       <Icon name="chevronRight" />
     </Link>

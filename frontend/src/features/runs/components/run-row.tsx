@@ -26,9 +26,9 @@ export function RunRow({ run }: { run: RunSummary }) {
       </td>
       <td className={`${CELL} tabular text-right`}>
         {run.openDeviations > 0 ? (
-          <span className="inline-flex items-center gap-1 font-bold text-oxide-800">
+          <span className="inline-flex items-center gap-1 whitespace-nowrap font-bold text-oxide-800">
             <Icon name="warning" className="size-4" />
-            {run.openDeviations} open
+            {run.openDeviations} not closed
           </span>
         ) : (
           <span className="text-graphite-600">0</span>

@@ -18,7 +18,7 @@ export function RunsTable({ runs }: { runs: RunSummary[] }) {
             <th scope="col" className={`${HEAD} text-right`}>Quantity (pcs)</th>
             <th scope="col" className={`${HEAD} text-left`}>Due</th>
             <th scope="col" className={`${HEAD} text-right`}>Steps done</th>
-            <th scope="col" className={`${HEAD} text-right`}>Open deviations</th>
+            <th scope="col" className={`${HEAD} text-right`}>Deviations not closed</th>
           </tr>
         </thead>
         <tbody>

@@ -37,7 +37,7 @@ describe('runs page', () => {
     expect(asked.at(-1)?.get('state')).toBe('on-hold');
     expect(router.state.location.search).toBe('?state=on-hold');
     expect(within(rowOf('R-2026-0042')).getByText('On hold')).toBeInTheDocument();
-    expect(within(rowOf('R-2026-0042')).getByText('2 open')).toBeInTheDocument();
+    expect(within(rowOf('R-2026-0042')).getByText('2 not closed')).toBeInTheDocument();
     expect(screen.getByText('Runs 1–1 of 1')).toBeInTheDocument();
   });
 
