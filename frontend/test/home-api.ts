@@ -1,29 +1,27 @@
 import { http, HttpResponse } from 'msw';
 
-import type { QualityDashboard, RunState, RunSummary } from '@tracewright/shared';
+import type { QualityWaiting, RunState, RunSummary } from '@tracewright/shared';
 
 // Invented figures for tests only; never used as check values.
-export const quietDashboard = (overrides: Partial<QualityDashboard> = {}): QualityDashboard => ({
-  openBySeverity: {},
-  openByAge: { underDay: 0, underWeek: 0, older: 0 },
-  runsAwaitingSignOff: [],
-  versionsAwaitingReview: [],
-  lowCapability: [],
+export const quietWaiting = (overrides: Partial<QualityWaiting> = {}): QualityWaiting => ({
+  deviationsNotClosed: 0,
+  runsAwaitingSignOff: 0,
+  versionsAwaitingReview: 0,
   ...overrides,
 });
 
 /**
- * The reads of the home page: runs by state (the first few and a total) and the quality overview.
+ * The reads of the home page: runs by state (the first few and a total) and the quality counts.
  * Any test that lands on "/" needs them.
  * States left out answer an empty list; `seen` collects the states asked for.
  */
-export function homeApis(runs: Partial<Record<RunState, { runs: RunSummary[]; total: number }>> = {}, dashboard: QualityDashboard = quietDashboard(), seen: string[] = []) {
+export function homeApis(runs: Partial<Record<RunState, { runs: RunSummary[]; total: number }>> = {}, waiting: QualityWaiting = quietWaiting(), seen: string[] = []) {
   return [
     http.get('/api/runs', ({ request }) => {
       const state = new URL(request.url).searchParams.get('state') as RunState;
       seen.push(state);
       return HttpResponse.json(runs[state] ?? { runs: [], total: 0 });
     }),
-    http.get('/api/quality/dashboard', () => HttpResponse.json(dashboard)),
+    http.get('/api/quality/waiting', () => HttpResponse.json(waiting)),
   ];
 }

@@ -1,11 +1,12 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
-import { QualityDashboardSchema, type QualityDashboard } from '@tracewright/shared';
+import { QualityDashboardSchema, QualityWaitingSchema, type QualityDashboard, type QualityWaiting } from '@tracewright/shared';
 
 import { signedInUser, type SignedIn } from '../../test/fixtures';
 import { completeRun, disposition, freshRun, reportProblem } from '../../test/quality-fixtures';
 import { createRecipe, passingContent, createProcessRecords, saveDraft, write } from '../../test/recipe-fixtures';
 import { createTestContext, TestClock, type TestContext } from '../../test/test-context';
+import { getQualityWaiting } from '../services/quality-dashboard.service';
 
 let t: TestContext;
 let clock: TestClock;
@@ -25,6 +26,12 @@ const dashboard = async (who: SignedIn): Promise<QualityDashboard> => {
   const res = await who.agent.get('/api/quality/dashboard');
   expect(res.status, JSON.stringify(res.body)).toBe(200);
   return QualityDashboardSchema.parse(res.body);
+};
+
+const waiting = async (who: SignedIn): Promise<QualityWaiting> => {
+  const res = await who.agent.get('/api/quality/waiting');
+  expect(res.status, JSON.stringify(res.body)).toBe(200);
+  return QualityWaitingSchema.parse(res.body);
 };
 
 describe('quality dashboard', () => {
@@ -60,7 +67,32 @@ describe('quality dashboard', () => {
     expect((await dashboard(quality)).versionsAwaitingReview).toContainEqual(expect.objectContaining({ id: draftId, recipeId, recipeCode: code, number: 1 }));
   });
 
-  it('when an operator asks for the dashboard, then 403', async () => {
+  it('when an operator asks for the dashboard or its counts, then 403', async () => {
     expect((await operator.agent.get('/api/quality/dashboard')).status).toBe(403);
+    expect((await operator.agent.get('/api/quality/waiting')).status).toBe(403);
+  });
+
+  it('when a run completes, a version goes to review and a deviation closes, then each count moves by exactly one', async () => {
+    const run = await freshRun(engineer, 1);
+    const deviationId = await reportProblem(operator, run.id);
+    const { draftId } = await createRecipe(engineer);
+    await waiting(quality); // the route answers 200 with the counts' schema
+    // Inside one transaction the counts see a snapshot plus its own changes, so other test files'
+    // writes cannot move them; it is rolled back, leaving the lab as it was.
+    const transaction = await t.ctx.sequelize.transaction();
+    try {
+      const before = await getQualityWaiting(t.ctx, transaction);
+      const change = (sql: string, id: number) => t.ctx.sequelize.query(sql, { replacements: [id], transaction });
+      await change("UPDATE runs SET state = 'completed' WHERE id = ?", run.id);
+      await change("UPDATE recipe_versions SET state = 'in-review' WHERE id = ?", draftId);
+      await change("UPDATE deviations SET state = 'closed' WHERE id = ?", deviationId);
+      expect(await getQualityWaiting(t.ctx, transaction)).toEqual({
+        runsAwaitingSignOff: before.runsAwaitingSignOff + 1,
+        versionsAwaitingReview: before.versionsAwaitingReview + 1,
+        deviationsNotClosed: before.deviationsNotClosed - 1,
+      });
+    } finally {
+      await transaction.rollback();
+    }
   });
 });

@@ -2,7 +2,7 @@ import { FreezeLimitsInputSchema, TrendPointNoteInputSchema, TrendQuerySchema, P
 
 import type { AppContext } from '../app-context';
 import { currentUser } from '../middleware/authenticate';
-import { getQualityDashboard } from '../services/quality-dashboard.service';
+import { getQualityDashboard, getQualityWaiting } from '../services/quality-dashboard.service';
 import { freezeLimits, getTrend, listTrendSpecs, notePoint } from '../services/trend.service';
 import { route, type RouteSpec } from './route-table';
 
@@ -23,6 +23,9 @@ export function trendRoutes(ctx: AppContext): RouteSpec[] {
     }),
     route('get', '/api/quality/dashboard', PERMISSIONS.readQuality, async (_req, res) => {
       res.json(await getQualityDashboard(ctx));
+    }),
+    route('get', '/api/quality/waiting', PERMISSIONS.readQuality, async (_req, res) => {
+      res.json(await getQualityWaiting(ctx));
     }),
   ];
 }

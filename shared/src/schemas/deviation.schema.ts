@@ -197,3 +197,11 @@ export const QualityDashboardSchema = z.object({
   lowCapability: z.array(z.object({ recipeId: z.number().int(), recipeCode: z.string(), specId: z.string(), specName: z.string(), cpk: z.number(), n: z.number().int() })),
 });
 export type QualityDashboard = z.infer<typeof QualityDashboardSchema>;
+
+/** What waits for a quality decision, counted whole (the home page's figures; the overview lists them). */
+export const QualityWaitingSchema = z.object({
+  deviationsNotClosed: z.number().int(),
+  runsAwaitingSignOff: z.number().int(),
+  versionsAwaitingReview: z.number().int(),
+});
+export type QualityWaiting = z.infer<typeof QualityWaitingSchema>;

@@ -23,13 +23,13 @@ export function QualityWaiting() {
         <>
           <ul className="space-y-2">
             <li>
-              <CountLink to={UNDECIDED} count={Object.values(data.openBySeverity).reduce((sum, n) => sum + n, 0)} one="deviation not yet closed" many="deviations not yet closed" />
+              <CountLink to={UNDECIDED} count={data.deviationsNotClosed} one="deviation not yet closed" many="deviations not yet closed" />
             </li>
             <li>
-              <CountLink to="/quality" count={data.runsAwaitingSignOff.length} one="run awaiting sign-off" many="runs awaiting sign-off" />
+              <CountLink to="/quality" count={data.runsAwaitingSignOff} one="run awaiting sign-off" many="runs awaiting sign-off" />
             </li>
             <li>
-              <CountLink to="/quality" count={data.versionsAwaitingReview.length} one="recipe version awaiting review" many="recipe versions awaiting review" />
+              <CountLink to="/quality" count={data.versionsAwaitingReview} one="recipe version awaiting review" many="recipe versions awaiting review" />
             </li>
           </ul>
           <p>

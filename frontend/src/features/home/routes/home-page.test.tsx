@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { apiError, signedInAs } from '../../../../test/api-fixtures';
 import { server } from '../../../../test/msw-server';
 import { renderApp } from '../../../../test/render-app';
-import { homeApis, quietDashboard } from '../../../../test/home-api';
+import { homeApis, quietWaiting } from '../../../../test/home-api';
 import { aRunSummary } from '../../../../test/run-summary';
 
 // Two runs in progress of an invented 8-step recipe.
@@ -21,7 +21,7 @@ describe('home page', () => {
           'in-progress': { runs: [aRunSummary({ ...IN_PROGRESS, id: 7, code: 'R-2026-0007', doneSteps: 3 }), aRunSummary({ ...IN_PROGRESS, id: 9, code: 'R-2026-0009', doneSteps: 0, openDeviations: 2 })], total: 2 },
           'on-hold': { runs: [aRunSummary({ id: 5, state: 'on-hold' })], total: 1 },
         },
-        quietDashboard(),
+        quietWaiting(),
         seen,
       ),
     );
@@ -48,10 +48,7 @@ describe('home page', () => {
       ...signedInAs('quality'),
       ...homeApis(
         {},
-        quietDashboard({
-          openBySeverity: { critical: 1, major: 3 },
-          runsAwaitingSignOff: [{ id: 41, code: 'R-2026-0041', recipeCode: 'GRID-9', completedAt: null, openDeviations: 0 }],
-        }),
+        quietWaiting({ deviationsNotClosed: 4, runsAwaitingSignOff: 1 }),
       ),
     );
     renderApp('/');
