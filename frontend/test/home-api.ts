@@ -13,13 +13,14 @@ export const quietWaiting = (overrides: Partial<QualityWaiting> = {}): QualityWa
 /**
  * The reads of the home page: runs by state (the first few and a total) and the quality counts.
  * Any test that lands on "/" needs them.
- * States left out answer an empty list; `seen` collects the states asked for.
+ * States left out answer an empty list; `seen` collects each read as `state:pageSize`.
  */
 export function homeApis(runs: Partial<Record<RunState, { runs: RunSummary[]; total: number }>> = {}, waiting: QualityWaiting = quietWaiting(), seen: string[] = []) {
   return [
     http.get('/api/runs', ({ request }) => {
-      const state = new URL(request.url).searchParams.get('state') as RunState;
-      seen.push(state);
+      const query = new URL(request.url).searchParams;
+      const state = query.get('state') as RunState;
+      seen.push(`${state}:${query.get('pageSize')}`);
       return HttpResponse.json(runs[state] ?? { runs: [], total: 0 });
     }),
     http.get('/api/quality/waiting', () => HttpResponse.json(waiting)),

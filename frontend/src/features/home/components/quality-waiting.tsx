@@ -1,12 +1,14 @@
 import { useQuery } from '@tanstack/react-query';
 
+import { DEVIATION_STATES } from '@tracewright/shared';
+
 import { TextLink } from '../../../components/ui/text-link';
 import { qualityWaitingQueryOptions } from '../api/get-quality-waiting';
 import { CountLink } from './count-link';
 import { HomeSection } from './home-section';
 
-/** Deviation states that still wait for a decision or a closure (the quality overview's "open"). */
-const UNDECIDED = '/deviations?state=open%2Cin-review%2Cdispositioned';
+/** The queue filtered to every state but closed: what the count counts. */
+const NOT_CLOSED = `/deviations?${new URLSearchParams({ state: DEVIATION_STATES.filter((state) => state !== 'closed').join(',') }).toString()}`;
 
 /** What waits for quality: deviations not yet closed, runs to sign off, versions to review. */
 export function QualityWaiting() {
@@ -23,7 +25,7 @@ export function QualityWaiting() {
         <>
           <ul className="space-y-2">
             <li>
-              <CountLink to={UNDECIDED} count={data.deviationsNotClosed} one="deviation not yet closed" many="deviations not yet closed" />
+              <CountLink to={NOT_CLOSED} count={data.deviationsNotClosed} one="deviation not yet closed" many="deviations not yet closed" />
             </li>
             <li>
               <CountLink to="/quality" count={data.runsAwaitingSignOff} one="run awaiting sign-off" many="runs awaiting sign-off" />

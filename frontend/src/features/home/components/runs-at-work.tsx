@@ -10,9 +10,9 @@ import { HomeSection } from './home-section';
  * on hold or planned. Operators are told how a run reaches their tablet.
  */
 export function RunsAtWork({ forOperator }: { forOperator: boolean }) {
-  const inProgress = useQuery(runsInStateQueryOptions('in-progress'));
-  const onHold = useQuery(runsInStateQueryOptions('on-hold'));
-  const planned = useQuery(runsInStateQueryOptions('planned'));
+  const inProgress = useQuery(runsInStateQueryOptions('in-progress', 5));
+  const onHold = useQuery(runsInStateQueryOptions('on-hold', 1));
+  const planned = useQuery(runsInStateQueryOptions('planned', 1));
   const failed = inProgress.isError || onHold.isError || planned.isError;
 
   return (
